@@ -1,0 +1,99 @@
+/**
+ * Instants ↔ local calendar dates in an IANA zone, through Intl (the runtime's tz database).
+ * Formatters are cached per zone, and the last answer per zone is remembered because a batch of
+ * verdicts is usually evaluated at one instant.
+ */
+import { formatDate } from "./calendar-date";
+
+interface WallClock {
+  year: number;
+  month: number;
+  day: number;
+  hour: number;
+  minute: number;
+  second: number;
+}
+
+const formatters = new Map<string, Intl.DateTimeFormat>();
+const lastAnswer = new Map<string, { ms: number; date: string }>();
+
+function formatterFor(timeZone: string): Intl.DateTimeFormat {
+  let formatter = formatters.get(timeZone);
+  if (!formatter) {
+    // Throws RangeError for an unknown zone: a bad zone is a caller bug, not a date to guess.
+    formatter = new Intl.DateTimeFormat("en-US", {
+      timeZone,
+      hourCycle: "h23",
+      year: "numeric",
+      month: "numeric",
+      day: "numeric",
+      hour: "numeric",
+      minute: "numeric",
+      second: "numeric",
+    });
+    formatters.set(timeZone, formatter);
+  }
+  return formatter;
+}
+
+function wallClock(ms: number, timeZone: string): WallClock {
+  const clock: WallClock = { year: 0, month: 0, day: 0, hour: 0, minute: 0, second: 0 };
+  for (const part of formatterFor(timeZone).formatToParts(ms)) {
+    switch (part.type) {
+      case "year":
+      case "month":
+      case "day":
+      case "hour":
+      case "minute":
+      case "second":
+        clock[part.type] = Number(part.value);
+        break;
+      default:
+        break;
+    }
+  }
+  return clock;
+}
+
+/** The team's local date "YYYY-MM-DD" at an instant. */
+export function localDateOf(instant: Date, timeZone: string): string {
+  const ms = instant.getTime();
+  const last = lastAnswer.get(timeZone);
+  if (last && last.ms === ms) return last.date;
+  const clock = wallClock(ms, timeZone);
+  const date = formatDate(clock.year, clock.month, clock.day);
+  lastAnswer.set(timeZone, { ms, date });
+  return date;
+}
+
+/** Offset of local wall-clock time from UTC at an instant, in milliseconds (east positive). */
+export function zoneOffsetMs(instant: Date, timeZone: string): number {
+  const ms = instant.getTime();
+  const c = wallClock(ms, timeZone);
+  const wallAsUtc = Date.UTC(c.year, c.month - 1, c.day, c.hour, c.minute, c.second);
+  return wallAsUtc - (ms - (((ms % 1000) + 1000) % 1000));
+}
+
+/**
+ * The instant of a local wall-clock time. Two passes settle the offset across a DST change. A wall time that does
+ * not exist (inside a spring-forward gap) resolves to a real instant next to the gap.
+ */
+export function instantOfLocal(date: string, time: { hour: number; minute: number; second: number; ms?: number }, timeZone: string): Date {
+  const guess = Date.UTC(
+    Number(date.slice(0, 4)),
+    Number(date.slice(5, 7)) - 1,
+    Number(date.slice(8, 10)),
+    time.hour,
+    time.minute,
+    time.second,
+    time.ms ?? 0,
+  );
+  const first = zoneOffsetMs(new Date(guess), timeZone);
+  const second = zoneOffsetMs(new Date(guess - first), timeZone);
+  return new Date(guess - second);
+}
+
+/** The last millisecond of a local date in the zone. */
+export function endOfLocalDay(date: string, timeZone: string): Date {
+  return instantOfLocal(date, { hour: 23, minute: 59, second: 59, ms: 999 }, timeZone);
+}
