@@ -1,0 +1,45 @@
+import { drizzle, type NodePgDatabase } from "drizzle-orm/node-postgres";
+import { Pool } from "pg";
+import * as schema from "./schema";
+
+export type Db = NodePgDatabase<typeof schema>;
+/** A transaction handle: operations that write several rows take one so callers can compose them. */
+export type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
+/** Either the pool-backed database or an open transaction. */
+export type Queryable = Db | Tx;
+
+let pool: Pool | undefined;
+let instance: Db | undefined;
+
+function connect(): Db {
+  if (instance) return instance;
+  const url = process.env.DATABASE_URL;
+  if (!url) throw new Error("DATABASE_URL is not set");
+  pool = new Pool({ connectionString: url, max: Number(process.env.DATABASE_POOL_SIZE ?? 10) });
+  instance = drizzle(pool, { schema });
+  return instance;
+}
+
+/**
+ * The shared database handle, connected on first use so tests and scripts can point DATABASE_URL at
+ * their own database before anything queries.
+ */
+export const db: Db = new Proxy({} as Db, {
+  get(_target, prop) {
+    const real = connect();
+    const value: unknown = Reflect.get(real, prop, real);
+    return typeof value === "function" ? value.bind(real) : value;
+  },
+});
+
+/** The underlying pool (for raw SQL in benchmarks, health checks and shutdown). */
+export function getPool(): Pool {
+  connect();
+  return pool!;
+}
+
+export async function closeDb(): Promise<void> {
+  await pool?.end();
+  pool = undefined;
+  instance = undefined;
+}

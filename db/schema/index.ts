@@ -1,0 +1,3 @@
+// Every table, one file per domain. drizzle-kit reads this file.
+export * from "./teams";
+export * from "./access";

@@ -1,0 +1,5 @@
+import type { SeedStep } from "../step";
+import { demoClub } from "./001-demo-club";
+
+/** In order. Append new steps; never edit or reorder one that has shipped. */
+export const SEED_STEPS: readonly SeedStep[] = [demoClub];

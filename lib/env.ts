@@ -1,0 +1,39 @@
+import { z } from "zod";
+
+/**
+ * Every setting the app reads, validated once. A missing or malformed value stops start-up with a
+ * message that names it, instead of failing later inside a request.
+ */
+export const ZEnv = z.object({
+  NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
+  DATABASE_URL: z.url({ protocol: /^postgres(ql)?$/, error: "DATABASE_URL must be a postgres:// URL" }),
+  DATABASE_POOL_SIZE: z.coerce.number().int().min(1).max(200).default(10),
+  AUTH_SECRET: z.string().min(32, "AUTH_SECRET must be at least 32 characters"),
+  APP_URL: z.url({ error: "APP_URL must be the absolute URL people open, e.g. http://localhost:3000" }),
+  PASSWORD_HASH_COST: z.coerce.number().int().min(4).max(15).default(12),
+  SMTP_HOST: z.string().min(1).default("127.0.0.1"),
+  SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(1025),
+  SMTP_USER: z.string().optional(),
+  SMTP_PASSWORD: z.string().optional(),
+  SMTP_SECURE: z.stringbool().default(false),
+  MAIL_FROM: z.string().min(3).default("Rungwise <no-reply@rungwise.test>"),
+});
+
+export type Env = z.infer<typeof ZEnv>;
+
+export function parseEnv(source: Record<string, string | undefined>): Env {
+  const result = ZEnv.safeParse(source);
+  if (!result.success) {
+    const lines = result.error.issues.map((i) => `  - ${i.path.join(".") || "(env)"}: ${i.message}`);
+    throw new Error(`Invalid environment configuration:\n${lines.join("\n")}`);
+  }
+  return result.data;
+}
+
+let cached: Env | undefined;
+
+/** The validated environment, parsed on first use (the instrumentation hook calls it at start-up). */
+export function env(): Env {
+  cached ??= parseEnv(process.env);
+  return cached;
+}

@@ -1,0 +1,33 @@
+import type { Role } from "./permissions";
+
+/**
+ * Navigation as data: every entry names the roles that see it. Shells render what the role allows;
+ * pages still check access in the data layer.
+ */
+export interface NavItem {
+  href: string;
+  label: string;
+  roles: readonly Role[];
+  /** Short label for the phone tab bar. */
+  short?: string;
+}
+
+export const COACH_NAV: readonly NavItem[] = [
+  { href: "/coach/athletes", label: "Athletes", roles: ["owner", "coach"] },
+  { href: "/coach/team", label: "Team", roles: ["owner", "coach"] },
+  { href: "/settings", label: "Settings", roles: ["owner", "coach"] },
+];
+
+export const ATHLETE_NAV: readonly NavItem[] = [
+  { href: "/today", label: "Today", short: "Today", roles: ["athlete"] },
+  { href: "/settings", label: "Settings", short: "Me", roles: ["athlete"] },
+];
+
+export function navFor(role: Role): readonly NavItem[] {
+  const source = role === "athlete" ? ATHLETE_NAV : COACH_NAV;
+  return source.filter((item) => item.roles.includes(role));
+}
+
+export function homeFor(role: Role): string {
+  return role === "athlete" ? "/today" : "/coach";
+}

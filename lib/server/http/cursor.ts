@@ -1,0 +1,31 @@
+import "server-only";
+import { z } from "zod";
+import { Unprocessable } from "@/lib/errors";
+
+/** Opaque keyset cursors: base64url JSON of the last row's sort key. */
+export function encodeCursor(value: unknown): string {
+  return Buffer.from(JSON.stringify(value), "utf8").toString("base64url");
+}
+
+export function decodeCursor<S extends z.ZodType>(schema: S, cursor: string | undefined): z.output<S> | undefined {
+  if (!cursor) return undefined;
+  try {
+    const parsed = schema.safeParse(JSON.parse(Buffer.from(cursor, "base64url").toString("utf8")));
+    if (parsed.success) return parsed.data;
+  } catch {
+    // fall through to the validation error below
+  }
+  throw new Unprocessable("Query string is not valid.", [{ path: "cursor", message: "Unknown or expired cursor." }]);
+}
+
+/** Splits a fetched `limit + 1` rows into a page and the cursor for the next one. */
+export function pageOf<T, K>(rows: T[], limit: number, keyOf: (row: T) => K) {
+  const items = rows.slice(0, limit);
+  const last = items.at(-1);
+  return {
+    items,
+    nextCursor: rows.length > limit && last !== undefined ? encodeCursor(keyOf(last)) : null,
+  };
+}
+
+export const zNameIdCursor = z.object({ name: z.string(), id: z.string() });

@@ -1,0 +1,53 @@
+import { z } from "zod";
+
+/** Shared building blocks for input schemas (browser-safe: no server imports). */
+export const zId = z.uuid({ error: "Must be an id (UUID)." });
+
+export const zEmail = z
+  .string()
+  .trim()
+  .toLowerCase()
+  .pipe(z.email({ error: "Enter a valid e-mail address." }))
+  .pipe(z.string().max(254, "E-mail address is too long."));
+
+export const PASSWORD_MIN = 10;
+export const zPassword = z
+  .string()
+  .min(PASSWORD_MIN, `Use at least ${PASSWORD_MIN} characters.`)
+  .max(200, "Use at most 200 characters.");
+
+export const zName = z.string().trim().min(1, "Enter a name.").max(100, "Keep it under 100 characters.");
+
+export function isTimeZone(value: string): boolean {
+  try {
+    new Intl.DateTimeFormat("en", { timeZone: value });
+    return value.includes("/") || value === "UTC";
+  } catch {
+    return false;
+  }
+}
+
+export const zTimeZone = z
+  .string()
+  .trim()
+  .refine(isTimeZone, "Choose a time zone such as Europe/Lisbon.");
+
+/** A calendar date as typed or sent: YYYY-MM-DD, and a real day. */
+export const zDate = z
+  .string()
+  .regex(/^\d{4}-\d{2}-\d{2}$/, "Use the form YYYY-MM-DD.")
+  .refine((value) => {
+    const d = new Date(`${value}T00:00:00Z`);
+    return !Number.isNaN(d.getTime()) && d.toISOString().slice(0, 10) === value;
+  }, "Not a real calendar date.");
+
+/** List pagination: an opaque cursor and a page size. */
+export const zPageQuery = z.strictObject({
+  cursor: z.string().max(500).optional(),
+  limit: z.coerce.number().int().min(1).max(100).default(50),
+});
+
+export interface Page<T> {
+  items: T[];
+  nextCursor: string | null;
+}
