@@ -12,6 +12,12 @@ export default defineConfig({
     include: ["lib/**/*.test.ts", "tests/unit/**/*.test.ts", "tests/integration/**/*.test.ts"],
     globalSetup: ["tests/support/global-setup.ts"],
     setupFiles: ["tests/support/setup.ts"],
+    // Cheap password hashing and fixed secrets for tests; the services' addresses come from scripts/test.mjs.
+    env: {
+      PASSWORD_HASH_COST: "4",
+      AUTH_SECRET: process.env.AUTH_SECRET ?? "test-secret-test-secret-test-secret-000",
+      APP_URL: process.env.APP_URL ?? "http://localhost:3000",
+    },
     testTimeout: 30_000,
     hookTimeout: 60_000,
   },

@@ -56,7 +56,7 @@ export const ladders = pgTable(
  * position so it keeps its row (and every athlete, log and promotion pointing at it) without taking a
  * live slot. The (ladder, position) unique constraint is made DEFERRABLE INITIALLY DEFERRED by hand in
  * drizzle/0001 (drizzle-kit cannot express it), so a reorder can swap positions in one transaction.
- *
+ */
 export const rungs = pgTable(
   "rungs",
   {
@@ -153,7 +153,7 @@ export const positionStatusEnum = pgEnum("position_status", [
 /**
  * Where an athlete stands on a ladder, plus the figures the coach's table sorts and filters on,
  * kept current in the same transaction as each log.
- *
+ */
 export const athletePositions = pgTable(
   "athlete_positions",
   {
