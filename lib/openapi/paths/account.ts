@@ -26,6 +26,14 @@ const ZInvite = z.object({ id: z.uuid(), email: z.string(), role: z.enum(["coach
 
 export function registerAccountPaths(registry: OpenAPIRegistry) {
   defineOperation(registry, {
+    method: "get",
+    path: "/api/v1/openapi.json",
+    tag: "Meta",
+    summary: "This document",
+    authenticated: false,
+    ok: { status: 200, description: "OpenAPI 3.1 document" },
+  });
+  defineOperation(registry, {
     method: "post",
     path: "/api/v1/signup",
     tag: "Account",

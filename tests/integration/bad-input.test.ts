@@ -1,0 +1,61 @@
+import { describe, expect, it } from "vitest";
+import { GET as getAthlete, PATCH as patchAthlete } from "@/app/api/v1/athletes/[id]/route";
+import { GET as listAthletes, POST as createAthlete } from "@/app/api/v1/athletes/route";
+import { POST as signup } from "@/app/api/v1/signup/route";
+import { POST as createToken } from "@/app/api/v1/tokens/route";
+import { bearerFor, createTeam } from "../support/factories";
+import { call } from "../support/http";
+
+describe("bad input never becomes a 500", () => {
+  it.each([
+    ["{not json", 400],
+    ["", 400],
+    ["null", 422],
+    ["[]", 422],
+    ['"a string"', 422],
+    ['{"name": 42}', 422],
+    ['{"name": }', 400],
+    [JSON.stringify({ name: "x".repeat(500) }), 422],
+    [JSON.stringify({ name: "Ok", email: "nope" }), 422],
+    [JSON.stringify({ name: "Ok", invite: true }), 422],
+    [JSON.stringify({ name: "Ok", primaryCoachId: "not-a-uuid" }), 422],
+    [JSON.stringify({ name: "Ok", extra: 1 }), 422],
+  ])("POST /api/v1/athletes with %s → %i", async (rawBody, status) => {
+    const { owner } = await createTeam();
+    const res = await call(createAthlete, {
+      method: "POST",
+      token: await bearerFor(owner),
+      rawBody,
+      headers: { "content-type": "application/json" },
+    });
+    expect(res.status).toBe(status);
+    expect(res.data.error?.code).toBeTruthy();
+  });
+
+  it("answers 404, not a database error, for ids that are not UUIDs", async () => {
+    const { owner } = await createTeam();
+    const token = await bearerFor(owner);
+    expect((await call(getAthlete, { token, params: { id: "1 or 1=1" } })).status).toBe(404);
+    expect((await call(patchAthlete, { token, method: "PATCH", params: { id: "abc" }, json: { name: "x" } })).status).toBe(404);
+  });
+
+  it("validates query strings with 422", async () => {
+    const { owner } = await createTeam();
+    const token = await bearerFor(owner);
+    expect((await call(listAthletes, { token, path: "/api/v1/athletes?limit=0" })).status).toBe(422);
+    expect((await call(listAthletes, { token, path: "/api/v1/athletes?limit=abc" })).status).toBe(422);
+    expect((await call(listAthletes, { token, path: "/api/v1/athletes?unknown=1" })).status).toBe(422);
+  });
+
+  it("refuses oversized bodies with 413", async () => {
+    const res = await call(signup, { method: "POST", rawBody: JSON.stringify({ pad: "x".repeat(300 * 1024) }) });
+    expect(res.status).toBe(413);
+  });
+
+  it("validates token names", async () => {
+    const { owner } = await createTeam();
+    const res = await call(createToken, { token: await bearerFor(owner), json: { name: "   " } });
+    expect(res.status).toBe(422);
+    expect(res.data.error?.issues?.[0]?.path).toBe("name");
+  });
+});
