@@ -1,9 +1,28 @@
 import { OpenAPIRegistry, OpenApiGeneratorV31 } from "@asteasolutions/zod-to-openapi";
 import { registerAccountPaths } from "./paths/account";
 import { registerAthletePaths } from "./paths/athletes";
+import { registerBillingPaths } from "./paths/billing";
+import { registerFormCheckPaths } from "./paths/form-checks";
+import { registerLadderPaths } from "./paths/ladders";
+import { registerLogPaths } from "./paths/logs";
+import { registerNotificationPaths } from "./paths/notifications";
+import { registerPromotionPaths } from "./paths/promotions";
+import { registerReadinessPaths } from "./paths/readiness";
+import { registerTrainingPaths } from "./paths/training";
 
-/** Domains add their operations here, one register function per file in ./paths. */
-const REGISTRARS = [registerAccountPaths, registerAthletePaths];
+/** Domains add their operations in ./paths, one register function per file. */
+const REGISTRARS = [
+  registerAccountPaths,
+  registerAthletePaths,
+  registerLadderPaths,
+  registerTrainingPaths,
+  registerLogPaths,
+  registerPromotionPaths,
+  registerReadinessPaths,
+  registerNotificationPaths,
+  registerFormCheckPaths,
+  registerBillingPaths,
+];
 
 let cached: object | undefined;
 

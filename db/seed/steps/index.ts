@@ -1,5 +1,6 @@
 import type { SeedStep } from "../step";
 import { demoClub } from "./001-demo-club";
+import { starterLibrary } from "./002-starter-library";
 
 /** In order. Append new steps; never edit or reorder one that has shipped. */
-export const SEED_STEPS: readonly SeedStep[] = [demoClub];
+export const SEED_STEPS: readonly SeedStep[] = [demoClub, starterLibrary];

@@ -1,10 +1,11 @@
 import "server-only";
 import type { Tx } from "@/db/client";
+import { installStarterLibrary } from "@/lib/server/ladders/install-starter-library";
 
 /**
- * What every new team starts with, in the sign-up transaction. The starter ladder library hooks in
- * here so new teams and the demo get the same library.
+ * What every new team starts with, inside the sign-up transaction: the starter ladder library, so a
+ * coach can place athletes on day one.
  */
-export async function afterTeamCreated(_tx: Tx, _team: { teamId: string; ownerId: string }): Promise<void> {
-  // The starter library is installed here once ladders exist.
+export async function afterTeamCreated(tx: Tx, team: { teamId: string; ownerId: string }): Promise<void> {
+  await installStarterLibrary(tx, team.teamId);
 }
