@@ -79,5 +79,3 @@ export function weekOfInstant(instant: Date, timeZone: string): string {
 export function isoWeekOfChecked(date: string): string | null {
   return parseDate(date) ? isoWeekOf(date) : null;
 }
-
-export { localDateOf };
