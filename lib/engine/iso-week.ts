@@ -79,3 +79,6 @@ export function weekOfInstant(instant: Date, timeZone: string): string {
 export function isoWeekOfChecked(date: string): string | null {
   return parseDate(date) ? isoWeekOf(date) : null;
 }
+
+/** Also reachable from here: weeks and local dates are used together. */
+export { localDateOf } from "./local-date";

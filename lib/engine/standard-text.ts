@@ -42,3 +42,5 @@ export function describeStandard(measure: Measure, standard: Standard): string {
   if (standard.painFree) parts.push("pain-free");
   return parts.filter((p): p is string => Boolean(p)).join(", ");
 }
+
+export { formatValue } from "./format-value";
