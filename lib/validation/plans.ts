@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { MEASURES } from "@/lib/engine";
+import type { Measure } from "@/lib/engine";
 import { zDate, zId, zName, zPageQuery } from "./common";
 
 export const WEEKS_MAX = 104;
@@ -113,7 +113,7 @@ export interface PlannedSlot {
   target: string | null;
   note: string | null;
   /** The athlete's current rung on the ladder; null when they have no position on it yet. */
-  rung: { id: string; name: string; measure: (typeof MEASURES)[number] } | null;
+  rung: { id: string; name: string; measure: Measure } | null;
 }
 
 export interface PlannedBlock {
