@@ -26,6 +26,8 @@ export async function assignPlan(
   athleteIds: readonly string[],
   input: CreateAssignmentInput,
   squadId: string | null,
+  /** Team-local today; the clock's by default (the seed passes its own `now`). */
+  today = localDateOf(new Date(), actor.timeZone),
 ): Promise<AssignmentDto[]> {
   const [plan] = await tx
     .select({ id: plans.id })
@@ -42,7 +44,6 @@ export async function assignPlan(
   // A stable order, so concurrent assignments lock position rows in the same sequence.
   const ladderIds = ladderRows.map((r) => r.ladderId).sort();
   const firstRungs = await firstLiveRungs(tx, actor.teamId, ladderIds);
-  const today = localDateOf(new Date(), actor.timeZone);
   const since = input.startsOn > today ? input.startsOn : today;
 
   const existing = ladderIds.length
