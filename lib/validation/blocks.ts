@@ -99,3 +99,10 @@ export const ZBlock = z.object({
   updatedAt: z.string(),
 });
 export type BlockDto = z.infer<typeof ZBlock>;
+
+/** A ladder the block editor can put in a slot, with the rung its estimate reads. */
+export interface LadderChoice {
+  id: string;
+  name: string;
+  firstRung: EstimateRung | null;
+}
