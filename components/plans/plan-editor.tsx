@@ -52,13 +52,15 @@ export function PlanEditor({ plan }: { plan: PlanDto | null }) {
   const [message, setMessage] = useState<{ tone: "moss" | "danger"; text: string } | null>(null);
   const [perDay, setPerDay] = useState<Record<number, string>>({});
   const blocks = useQuery({ queryKey: ["blocks", "list"], queryFn: () => api<Page<BlockDto>>("/api/v1/blocks?limit=100") });
+  // Archived blocks stay in the plans that use them: look them up for names and estimates.
+  const archived = useQuery({ queryKey: ["blocks", "archived"], queryFn: () => api<Page<BlockDto>>("/api/v1/blocks?archived=true&limit=100") });
   const form = useForm<FormIn, unknown, FormOut>({
     resolver: zodResolver(ZPlanFields),
     defaultValues: { name: plan?.name ?? "", weeks: plan?.weeks ?? 6, warmUp: plan?.warmUp ?? "", coolDown: plan?.coolDown ?? "" },
   });
 
   const choices = blocks.data?.items ?? [];
-  const byId = new Map(choices.map((b) => [b.id, b]));
+  const byId = new Map([...(archived.data?.items ?? []), ...choices].map((b) => [b.id, b]));
   const dayEstimate = (ids: string[]) => estimateSessionSec(ids.flatMap((id) => (byId.has(id) ? [asEstimate(byId.get(id)!)] : [])));
   const days = WEEKDAYS.filter(({ day }) => week[day]!.length > 0).map(({ day }) => ({ weekday: day, blockIds: week[day]! }));
 

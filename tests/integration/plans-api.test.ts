@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { DELETE as deleteBlock } from "@/app/api/v1/blocks/[id]/route";
 import { POST as createBlock } from "@/app/api/v1/blocks/route";
 import { DELETE as deletePlan, GET as getPlan, PATCH as patchPlan } from "@/app/api/v1/plans/[id]/route";
 import { GET as listPlans, POST as createPlan } from "@/app/api/v1/plans/route";
@@ -121,5 +122,18 @@ describe("plans API", () => {
     const again = await call(assignAthlete, { token, params: { id: athlete }, json: { planId: used.data.id, startsOn: "2026-02-02" } });
     expect(again.status).toBe(422);
     expect(again.data.error?.issues?.[0]?.path).toBe("planId");
+  });
+
+  it("keeps an archived block in the plans that already use it, but never adds it anew", async () => {
+    const { token, blockA, blockB } = await teamWithBlocks();
+    const plan = await call(createPlan, { token, json: { name: "Keeps", weeks: 2, days: [{ weekday: 1, blockIds: [blockA] }] } });
+    expect((await call(deleteBlock, { token, method: "DELETE", params: { id: blockA } })).status).toBe(204);
+    const params = { id: plan.data.id as string };
+    const kept = await call(patchPlan, { token, method: "PATCH", params, json: { days: [{ weekday: 1, blockIds: [blockA, blockB] }] } });
+    expect(kept.status).toBe(200);
+    expect((kept.data as unknown as Plan).days[0]!.blockIds).toEqual([blockA, blockB]);
+    const fresh = await call(createPlan, { token, json: { name: "New", weeks: 2, days: [{ weekday: 2, blockIds: [blockB, blockA] }] } });
+    expect(fresh.status).toBe(422);
+    expect(fresh.data.error?.issues?.[0]?.path).toBe("days.0.blockIds.1");
   });
 });

@@ -11,7 +11,7 @@ export async function createSquad(actor: Actor, input: CreateSquadInput) {
   return db.transaction(async (tx) => {
     const [row] = await tx
       .insert(squads)
-      .values({ teamId: actor.teamId, name: input.name, description: input.description ?? null })
+      .values({ teamId: actor.teamId, name: input.name, description: input.description || null })
       .returning({ id: squads.id });
     await replaceMembers(tx, actor.teamId, row!.id, input.athleteIds ?? []);
     return getSquad(actor, row!.id, tx);

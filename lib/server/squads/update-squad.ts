@@ -11,7 +11,7 @@ import { getSquad } from "./get-squad";
 export async function updateSquad(actor: Actor, squadId: string, input: UpdateSquadInput) {
   const updated = await db
     .update(squads)
-    .set({ name: input.name, description: input.description })
+    .set({ name: input.name, description: input.description === undefined ? undefined : input.description || null })
     .where(and(eq(squads.id, squadId), eq(squads.teamId, actor.teamId), isNull(squads.archivedAt)))
     .returning({ id: squads.id });
   if (updated.length === 0) throw new NotFound("squad");
