@@ -2,6 +2,8 @@ import { expect, test } from "@playwright/test";
 import { uniqueEmail } from "./support/mail";
 
 test("a coach builds a squad, a block, a plan, and gives the plan to the squad", async ({ page }) => {
+  // A long journey through four screens; the shared test machine can be slow.
+  test.setTimeout(180_000);
   await page.goto("/sign-up");
   await page.getByLabel("Your name").fill("Odile Marsh");
   await page.getByLabel("Club or business name").fill("Harbourside Levers");
@@ -9,7 +11,8 @@ test("a coach builds a squad, a block, a plan, and gives the plan to the squad",
   await page.getByLabel("Password").fill("harbourside-strong-pass");
   await page.getByLabel("Time zone").fill("Europe/Lisbon");
   await page.getByRole("button", { name: "Create my team" }).click();
-  await expect(page.getByRole("heading", { name: "Athletes" })).toBeVisible();
+  // Sign-up hashes the password and installs the starter ladders: allow it longer on a busy machine.
+  await expect(page.getByRole("heading", { name: "Athletes" })).toBeVisible({ timeout: 45_000 });
 
   // Two athletes trained in person (no e-mail).
   const addForm = page.getByRole("complementary");
@@ -69,7 +72,7 @@ test("a coach builds a squad, a block, a plan, and gives the plan to the squad",
   // Assign to the squad.
   await page.getByRole("button", { name: "Assign", exact: true }).click();
   const dialog = page.getByRole("dialog", { name: "Assign Levers base" });
-  await dialog.getByLabel("Squad").selectOption({ label: "Thursday levers (2)" });
+  await dialog.getByLabel("Squad", { exact: true }).selectOption({ label: "Thursday levers (2)" });
   await dialog.getByLabel("Starts on").fill("2030-01-07");
   await dialog.getByLabel("Ends on (optional)").fill("2030-01-01");
   await dialog.getByRole("button", { name: "Assign", exact: true }).click();
