@@ -9,6 +9,8 @@ const mtime = (file) => fs.statSync(file).mtimeMs;
 
 /** `npm install` when node_modules is missing or older than package-lock.json. */
 export async function ensureNodeModules(root) {
+  // A linked node_modules (a second checkout sharing one install) is managed where it lives.
+  if (fs.existsSync(path.join(root, "node_modules")) && fs.lstatSync(path.join(root, "node_modules")).isSymbolicLink()) return;
   const lock = path.join(root, "package-lock.json");
   // npm rewrites this hidden lockfile on every install, so it dates the installed tree.
   const marker = path.join(root, "node_modules", ".package-lock.json");
