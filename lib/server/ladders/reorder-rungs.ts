@@ -34,7 +34,7 @@ export async function reorderRungs(actor: Actor, ladderId: string, rungIds: stri
     const positions = new Map(rungIds.map((id, i) => [id, i + 1]));
     await assertPrerequisiteGraph(tx, actor.teamId, { reorder: { positions, path: "rungIds" } });
     const cases = sql.join(
-      rungIds.map((id, i) => sql`when ${id}::uuid then ${i + 1}`),
+      rungIds.map((id, i) => sql`when ${id}::uuid then ${i + 1}::int`),
       sql` `,
     );
     await tx
