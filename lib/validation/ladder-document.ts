@@ -1,6 +1,5 @@
 import { z } from "zod";
-import { zName } from "./common";
-import { standardIssues, zMeasure, zPromotionMode, zRungTag, ZStandardInput } from "./ladders";
+import { standardIssues, zLabel, zMeasure, zPromotionMode, zRungTag, ZStandardInput, zTargetSkill, zText } from "./ladders";
 
 /**
  * Our own file format for sharing one ladder between teams: `rungwise.ladder` version 1. Rungs carry
@@ -14,8 +13,8 @@ export const LADDER_DOCUMENT_VERSION = 1;
 export const ZDocumentPrerequisite = z.union([
   z.strictObject({ rung: z.string().min(1).max(60).describe("Key of a rung in this document") }),
   z.strictObject({
-    ladder: zName.describe("Name of a ladder outside this document"),
-    rung: zName.describe("Name of a rung on that ladder"),
+    ladder: zLabel.describe("Name of a ladder outside this document"),
+    rung: zLabel.describe("Name of a rung on that ladder"),
   }),
 ]);
 export type DocumentPrerequisite = z.infer<typeof ZDocumentPrerequisite>;
@@ -26,11 +25,11 @@ const zKey = z
 
 export const ZDocumentRung = z.strictObject({
   key: zKey.describe("Local to this document; unique among its rungs"),
-  name: zName,
+  name: zLabel,
   measure: zMeasure,
-  setting: z.string().trim().max(200).nullable().optional(),
-  cues: z.string().trim().max(2000).nullable().optional(),
-  caution: z.string().trim().max(500).nullable().optional(),
+  setting: zText(200).nullable().optional(),
+  cues: zText(2000).nullable().optional(),
+  caution: zText(500).nullable().optional(),
   demoVideoUrl: z.url({ protocol: /^https?$/ }).max(500).nullable().optional(),
   tags: z.array(zRungTag).max(20).optional(),
   standard: ZStandardInput,
@@ -43,10 +42,10 @@ export const ZLadderDocument = z
     format: z.literal(LADDER_DOCUMENT_FORMAT),
     version: z.literal(LADDER_DOCUMENT_VERSION),
     ladder: z.strictObject({
-      name: zName,
-      targetSkill: z.string().trim().min(1, "Name the target skill.").max(100),
+      name: zLabel,
+      targetSkill: zTargetSkill,
       promotionMode: zPromotionMode,
-      notes: z.string().trim().max(2000).nullable().optional(),
+      notes: zText(2000).nullable().optional(),
     }),
     rungs: z.array(ZDocumentRung).max(50, "At most 50 rungs on a ladder."),
   })

@@ -84,7 +84,14 @@ export function standardIssues(measure: Measure, standard: Pick<StandardInput, "
   return [];
 }
 
-const zOptionalText = (max: number) => z.string().trim().max(max, `Keep it under ${max} characters.`).nullable().optional();
+/** PostgreSQL text cannot hold NUL characters; refuse them here rather than fail in the database. */
+export const noNul = (value: string) => !value.includes("\u0000");
+const NUL_MESSAGE = "Contains a character that cannot be stored.";
+export const zText = (max: number) => z.string().trim().max(max, `Keep it under ${max} characters.`).refine(noNul, NUL_MESSAGE);
+export const zLabel = zName.refine(noNul, NUL_MESSAGE);
+export const zTargetSkill = z.string().trim().min(1, "Name the target skill.").max(100, "Keep it under 100 characters.").refine(noNul, NUL_MESSAGE);
+
+const zOptionalText = (max: number) => zText(max).nullable().optional();
 
 const zVideoUrl = z
   .url({ protocol: /^https?$/, error: "Use a web address starting with http:// or https://." })
@@ -103,7 +110,7 @@ const zPrerequisiteIds = z
   .refine((ids) => new Set(ids).size === ids.length, "Each prerequisite once.");
 
 const rungFields = {
-  name: zName,
+  name: zLabel,
   measure: zMeasure,
   setting: zOptionalText(200),
   cues: zOptionalText(2000),
@@ -141,8 +148,8 @@ export const ZRungPatch = z
 export type RungPatch = z.infer<typeof ZRungPatch>;
 
 const ladderFields = {
-  name: zName,
-  targetSkill: z.string().trim().min(1, "Name the target skill.").max(100, "Keep it under 100 characters."),
+  name: zLabel,
+  targetSkill: zTargetSkill,
   promotionMode: zPromotionMode,
   notes: zOptionalText(2000),
 };
@@ -164,7 +171,7 @@ export const ZLadderPatch = z
   .refine((v) => Object.keys(v).length > 0, { message: "Send at least one field to change." });
 export type LadderPatch = z.infer<typeof ZLadderPatch>;
 
-export const ZDuplicateLadder = z.strictObject({ name: zName.optional() });
+export const ZDuplicateLadder = z.strictObject({ name: zLabel.optional() });
 
 export const ZRungOrder = z.strictObject({
   rungIds: z

@@ -84,3 +84,10 @@ describe("prerequisites across a team's ladders", () => {
     expect(checkPrerequisites(cyclic).map((p) => p.problem)).toEqual(["cycle"]);
   });
 });
+
+describe("text the database cannot store", () => {
+  it("refuses NUL characters in names and notes with the field's path (never a database error)", () => {
+    const body = { name: "Lever\u0000", targetSkill: "Front lever", promotionMode: "auto", notes: "a\u0000b", rungs: [] };
+    expect(paths(ZCreateLadder.safeParse(body)).sort()).toEqual(["name", "notes"]);
+  });
+});
