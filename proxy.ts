@@ -1,7 +1,7 @@
 import { NextResponse, type NextRequest } from "next/server";
 
 const PUBLIC = ["/", "/sign-in", "/sign-up", "/forgot-password"];
-const PUBLIC_PREFIXES = ["/invite/", "/reset-password/"];
+const PUBLIC_PREFIXES = ["/invite/", "/reset-password/", "/approve/", "/unsubscribe/"];
 const SESSION_COOKIES = ["authjs.session-token", "__Secure-authjs.session-token"];
 
 /**

@@ -16,6 +16,7 @@ export const COACH_NAV: readonly NavItem[] = [
   { href: "/coach/athletes", label: "Athletes", roles: ["owner", "coach"] },
   { href: "/coach/team", label: "Team", roles: ["owner", "coach"] },
   { href: "/settings", label: "Settings", roles: ["owner", "coach"] },
+  { href: "/coach/admin/jobs", label: "Mail jobs", roles: ["owner"] },
 ];
 
 export const ATHLETE_NAV: readonly NavItem[] = [
