@@ -18,9 +18,7 @@ export interface CoachDigest {
 function Section({ title, empty, lines }: { title: string; empty: string; lines: string[] }) {
   return (
     <>
-      <Text style={emailStyles.subheading}>
-        {title} ({lines.length})
-      </Text>
+      <Text style={emailStyles.subheading}>{`${title} (${lines.length})`}</Text>
       {lines.length === 0 ? <Text style={emailStyles.small}>{empty}</Text> : null}
       {lines.map((line, i) => (
         <Text key={i} style={emailStyles.item}>
