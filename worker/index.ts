@@ -10,6 +10,9 @@ import { relayOutbox } from "@/lib/server/jobs/relay-outbox";
 import { runDailyEvaluations } from "@/lib/server/jobs/run-daily-evaluations";
 
 const IDLE_MS = 500;
+const CONCURRENCY = Number(process.env.WORKER_CONCURRENCY ?? 16);
+// Sending waits mostly on SMTP and the database: more lanes than cores, and connections to match.
+process.env.DATABASE_POOL_SIZE ??= String(CONCURRENCY + 8);
 let stopping = false;
 let wake: (() => void) | null = null;
 
@@ -30,7 +33,7 @@ async function mailLoop() {
     let busy = 0;
     try {
       busy += await relayOutbox(boss);
-      busy += await processMailBatch(boss, { batchSize: 50, concurrency: 8 });
+      busy += await processMailBatch(boss, { batchSize: 100, concurrency: CONCURRENCY });
     } catch (error) {
       log(`mail loop: ${error instanceof Error ? error.message : String(error)}`);
     }
