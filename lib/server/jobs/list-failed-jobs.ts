@@ -4,6 +4,8 @@ import { Forbidden } from "@/lib/errors";
 import type { Actor } from "@/lib/server/actor";
 import { MAIL_QUEUE } from "./mail-job";
 
+const UNDEFINED_TABLE = "42P01";
+
 export interface FailedJob {
   id: string;
   kind: string;
@@ -17,7 +19,8 @@ export interface FailedJob {
 /** Mail jobs of the owner's team that used up their retries (pg-boss state "failed"), newest first. */
 export async function listFailedJobs(actor: Actor, limit = 100): Promise<FailedJob[]> {
   if (actor.role !== "owner") throw new Forbidden();
-  const { rows } = await getPool().query<{
+  const { rows } = await getPool()
+    .query<{
     id: string;
     kind: string | null;
     recipient: string | null;
@@ -31,8 +34,13 @@ export async function listFailedJobs(actor: Actor, limit = 100): Promise<FailedJ
       WHERE name = $1 AND state = 'failed' AND data->>'teamId' = $2
       ORDER BY completed_on DESC NULLS LAST
       LIMIT $3`,
-    [MAIL_QUEUE, actor.teamId, limit],
-  );
+      [MAIL_QUEUE, actor.teamId, limit],
+    )
+    .catch((error: unknown) => {
+      // Before the worker first started there is no pgboss schema: nothing has failed yet.
+      if ((error as { code?: string }).code === UNDEFINED_TABLE) return { rows: [] };
+      throw error;
+    });
   return rows.map((r) => ({
     id: r.id,
     kind: r.kind ?? "unknown",
