@@ -1,6 +1,6 @@
 // The background worker: relays the mail outbox into pg-boss, sends mail with retries, and runs the
-// scheduler tick (due digests, daily re-evaluation). Run: npm run worker (tsx with `server-only` stubbed; not the react-server condition, which breaks
-// react-dom/server and so e-mail rendering)
+// scheduler tick (due digests, daily re-evaluation). Run: `npm run worker` (tsx with `server-only`
+// stubbed; not the react-server condition, which breaks react-dom/server and so e-mail rendering).
 import { closeDb } from "@/db/client";
 import { env } from "@/lib/env";
 import { getBoss, stopBoss } from "@/lib/server/jobs/boss";
