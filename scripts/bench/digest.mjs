@@ -78,7 +78,7 @@ async function mailCatcher() {
     stdio: "ignore",
   });
   children.push(child);
-  await waitFor(async () => (await fetch(`http://127.0.0.1:${web}/email`)).ok, 20_000, "maildev");
+  await waitFor(async () => (await fetch(`http://127.0.0.1:${web}/email`)).ok, 60_000, "maildev");
   return { host: "127.0.0.1", port: String(smtp) };
 }
 
