@@ -2,7 +2,7 @@ import { NextResponse, type NextRequest } from "next/server";
 import { hasSessionCookie } from "@/lib/session-cookies";
 
 const PUBLIC = ["/", "/sign-in", "/sign-up", "/forgot-password"];
-const PUBLIC_PREFIXES = ["/invite/", "/reset-password/"];
+const PUBLIC_PREFIXES = ["/invite/", "/reset-password/", "/approve/", "/unsubscribe/"];
 
 /**
  * Only a convenience redirect for signed-out visitors on pages. It never authorizes anything: every

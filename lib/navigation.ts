@@ -20,6 +20,7 @@ export const COACH_NAV: readonly NavItem[] = [
   { href: "/coach/plans", label: "Plans", roles: ["owner", "coach"] },
   { href: "/coach/team", label: "Team", roles: ["owner", "coach"] },
   { href: "/settings", label: "Settings", roles: ["owner", "coach"] },
+  { href: "/coach/admin/jobs", label: "Mail jobs", roles: ["owner"] },
 ];
 
 export const ATHLETE_NAV: readonly NavItem[] = [
