@@ -14,6 +14,7 @@ export interface NavItem {
 
 export const COACH_NAV: readonly NavItem[] = [
   { href: "/coach/athletes", label: "Athletes", roles: ["owner", "coach"] },
+  { href: "/coach/approvals", label: "Approvals", roles: ["owner", "coach"] },
   { href: "/coach/team", label: "Team", roles: ["owner", "coach"] },
   { href: "/settings", label: "Settings", roles: ["owner", "coach"] },
 ];

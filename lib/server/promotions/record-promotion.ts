@@ -1,6 +1,6 @@
 import "server-only";
 import { and, eq, gte, sql } from "drizzle-orm";
-import type { Tx } from "@/db/client";
+import type { Queryable, Tx } from "@/db/client";
 import { promotions } from "@/db/schema";
 import type { PositionContext } from "./load-position-context";
 import type { StoredVerdict } from "./verdict-dto";
@@ -57,8 +57,8 @@ export async function recordPendingPromotion(
   return { id: existing!.id, created: false };
 }
 
-export async function pendingPromotionOf(tx: Tx, positionId: string) {
-  const [row] = await tx
+export async function pendingPromotionOf(q: Queryable, positionId: string) {
+  const [row] = await q
     .select({ id: promotions.id, direction: promotions.direction })
     .from(promotions)
     .where(and(eq(promotions.positionId, positionId), eq(promotions.status, "pending")));
