@@ -10,7 +10,7 @@ function longDate(date: string): string {
   return new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "long", timeZone: "UTC" }).format(new Date(`${date}T00:00:00Z`));
 }
 
-export function forecastText(forecast: ForecastDto): string {
+function forecastText(forecast: ForecastDto): string {
   const target = formatValue(forecast.measure as Measure, forecast.target);
   switch (forecast.reason) {
     case "trending_up":
