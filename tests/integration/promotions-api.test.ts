@@ -156,4 +156,43 @@ describe("approvals", () => {
     });
     expect(res.data.clauseLines).toContain("2 of the last 3 sessions met (needs 2)");
   });
+
+  it("approving the last rung's proposal marks the skill achieved", async () => {
+    const team = await createTeam();
+    const athleteId = await createAthleteRecord(team.teamId, "Finisher");
+    const ladder = await createTestLadder(team.teamId, { mode: "approve", rungCount: 2 });
+    const positionId = await placeAthlete(team.teamId, athleteId, ladder, ladder.rungIds[1]!, daysAgo(10));
+    for (const n of [3, 1]) {
+      await logAndEvaluate(team.owner, { teamId: team.teamId, athleteId, ladderId: ladder.ladderId, rungId: ladder.rungIds[1]!, date: daysAgo(n) });
+    }
+    const [pending] = await db.select().from(promotions).where(eq(promotions.positionId, positionId));
+    expect(pending).toMatchObject({ status: "pending", toRungId: null, direction: "up" });
+    expect(await positionOf(positionId)).toMatchObject({ status: "pending_approval", achievedAt: null });
+
+    const res = await call(approveRoute, { token: await bearerFor(team.owner), method: "POST", params: { id: pending!.id } });
+    expect(res.status).toBe(200);
+    expect(res.data).toMatchObject({ status: "approved", toRung: null });
+    const position = await positionOf(positionId);
+    expect(position).toMatchObject({ status: "achieved", readiness: 100, rungId: ladder.rungIds[1] });
+    expect(position.achievedAt).toBeInstanceOf(Date);
+    const moves = await db.select().from(positionMoves).where(eq(positionMoves.promotionId, pending!.id));
+    expect(moves).toMatchObject([{ cause: "approved", toRungId: null, fromRungId: ladder.rungIds[1] }]);
+  });
+
+  it("approving a step-down moves the athlete one rung down with a step_down audit row", async () => {
+    const team = await createTeam();
+    const athleteId = await createAthleteRecord(team.teamId, "Sore");
+    const ladder = await createTestLadder(team.teamId, { mode: "auto" });
+    const positionId = await placeAthlete(team.teamId, athleteId, ladder, ladder.rungIds[1]!, daysAgo(10));
+    for (const n of [3, 1]) {
+      await logAndEvaluate(team.owner, { teamId: team.teamId, athleteId, ladderId: ladder.ladderId, rungId: ladder.rungIds[1]!, date: daysAgo(n), pain: true });
+    }
+    const [pending] = await db.select().from(promotions).where(eq(promotions.positionId, positionId));
+    expect(pending).toMatchObject({ status: "pending", direction: "down", toRungId: ladder.rungIds[0] });
+    const res = await call(approveRoute, { token: await bearerFor(team.owner), method: "POST", params: { id: pending!.id } });
+    expect(res.status).toBe(200);
+    expect(await positionOf(positionId)).toMatchObject({ rungId: ladder.rungIds[0], since: daysAgo(1), status: "not_yet" });
+    const moves = await db.select().from(positionMoves).where(eq(positionMoves.promotionId, pending!.id));
+    expect(moves).toMatchObject([{ cause: "step_down", actorKind: "user", fromRungId: ladder.rungIds[1], toRungId: ladder.rungIds[0] }]);
+  });
 });
