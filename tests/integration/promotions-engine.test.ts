@@ -117,7 +117,7 @@ describe("auto promotion", () => {
     expect(waiting!.explanation).toBe("2 of 3 sessions met — needs 2 more days on this rung");
 
     const inThreeDays = new Date(Date.now() + 3 * 86_400_000);
-    const verdict = await db.transaction((tx) => evaluatePosition(tx, { positionId, asOf: inThreeDays, by: "system" }));
+    const verdict = await db.transaction((tx) => evaluatePosition(tx, { positionId, asOf: inThreeDays, actor: "system" }));
     expect(verdict).toMatchObject({ status: "met", promotedTo: ladder.rungIds[1] });
     expect(await positionRow(positionId)).toMatchObject({ rungId: ladder.rungIds[1], since: daysAgo(1) });
   });
@@ -196,7 +196,7 @@ describe("prerequisites", () => {
 
     // Once the athlete reaches Rings rung 2, the next evaluation promotes.
     await placeAthlete(teamId, athleteId, rings, rings.rungIds[1]!, daysAgo(0));
-    const after = await db.transaction((tx) => evaluatePosition(tx, { positionId, asOf: new Date(), by: owner }));
+    const after = await db.transaction((tx) => evaluatePosition(tx, { positionId, asOf: new Date(), actor: owner }));
     expect(after).toMatchObject({ status: "met", promotedTo: press.rungIds[1] });
   });
 });

@@ -75,7 +75,7 @@ export const readinessScenario: SeedStep = {
       .from(athletePositions)
       .where(eq(athletePositions.teamId, team.teamId))
       .orderBy(athletePositions.athleteId, athletePositions.ladderId);
-    for (const position of positions) await evaluatePosition(tx, { positionId: position.id, asOf: now, by: "system" });
+    for (const position of positions) await evaluatePosition(tx, { positionId: position.id, asOf: now, actor: "system" });
   },
 };
 

@@ -47,7 +47,7 @@ export async function approvePromotion(actor: Actor, promotionId: string, asOf: 
       at: decidedAt,
     });
     await enqueueNotice(tx, { kind: "promotion", promotionId: promotion.id });
-    await evaluatePosition(tx, { positionId: ctx.position.id, asOf, by: actor });
+    await evaluatePosition(tx, { positionId: ctx.position.id, asOf, actor });
   });
   return getPromotion(actor, promotionId);
 }

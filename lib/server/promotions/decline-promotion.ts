@@ -18,7 +18,7 @@ export async function declinePromotion(actor: Actor, promotionId: string, asOf: 
       .update(promotions)
       .set({ status: "declined", decidedById: actor.userId, decidedAt: new Date() })
       .where(eq(promotions.id, promotion.id));
-    await evaluatePosition(tx, { positionId: ctx.position.id, asOf, by: actor });
+    await evaluatePosition(tx, { positionId: ctx.position.id, asOf, actor });
   });
   return getPromotion(actor, promotionId);
 }

@@ -45,7 +45,7 @@ export async function evaluateAfterLog(
 
   const verdicts: VerdictDto[] = [];
   for (const position of positions) {
-    verdicts.push(await evaluatePosition(tx, { positionId: position.id, asOf, by: actor, logId: input.logId }));
+    verdicts.push(await evaluatePosition(tx, { positionId: position.id, asOf, actor, logId: input.logId }));
   }
   return verdicts;
 }

@@ -24,7 +24,7 @@ export type EvaluationActor = Actor | "system";
 export interface EvaluatePositionInput {
   positionId: string;
   asOf: Date;
-  by: EvaluationActor;
+  actor: EvaluationActor;
   /** The log that triggered the evaluation, kept on any promotion it causes. */
   logId?: string | null;
 }
@@ -46,7 +46,7 @@ type Outcome = { promotedTo: string | null; pendingPromotionId: string | null; a
  * written in the same transaction. Returns the verdict of the rung evaluated.
  */
 export async function evaluatePosition(tx: Tx, input: EvaluatePositionInput): Promise<VerdictDto> {
-  const teamId = input.by === "system" ? undefined : input.by.teamId;
+  const teamId = input.actor === "system" ? undefined : input.actor.teamId;
   const ctx = await loadPositionContext(tx, { positionId: input.positionId, teamId, lock: true });
   if (!ctx) throw new NotFound("position");
   const judged = await judgePosition(tx, ctx, input.asOf);
