@@ -14,6 +14,7 @@ export interface NavItem {
 
 export const COACH_NAV: readonly NavItem[] = [
   { href: "/coach/athletes", label: "Athletes", roles: ["owner", "coach"] },
+  { href: "/coach/approvals", label: "Approvals", roles: ["owner", "coach"] },
   { href: "/coach/ladders", label: "Ladders", roles: ["owner", "coach"] },
   { href: "/coach/squads", label: "Squads", roles: ["owner", "coach"] },
   { href: "/coach/blocks", label: "Blocks", roles: ["owner", "coach"] },

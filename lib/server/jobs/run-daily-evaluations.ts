@@ -3,7 +3,7 @@ import { and, asc, eq, isNull } from "drizzle-orm";
 import { db } from "@/db/client";
 import { athletePositions, athletes, dailyEvaluations, teams } from "@/db/schema";
 import { localDateOf } from "@/lib/engine";
-import { evaluatePositionAdapter } from "@/lib/server/notifications/adapters/evaluate-position";
+import { evaluatePosition } from "@/lib/server/promotions/evaluate-position";
 
 export interface DailyResult {
   teamId: string;
@@ -38,10 +38,10 @@ export async function runDailyEvaluation(teamId: string, now: Date): Promise<Dai
       .orderBy(asc(athletePositions.ladderId), asc(athletePositions.id));
     const result: DailyResult = { teamId, localDate, evaluated: 0, promoted: 0, pending: 0 };
     for (const position of positions) {
-      const { outcome } = await evaluatePositionAdapter(tx, { positionId: position.id, asOf: localDate });
+      const verdict = await evaluatePosition(tx, { positionId: position.id, asOf: now, actor: "system" });
       result.evaluated += 1;
-      if (outcome === "promoted") result.promoted += 1;
-      if (outcome === "pending") result.pending += 1;
+      if (verdict.promotedTo || verdict.achieved) result.promoted += 1;
+      else if (verdict.pendingPromotionId) result.pending += 1;
     }
     await tx
       .update(dailyEvaluations)

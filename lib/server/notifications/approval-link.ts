@@ -7,7 +7,7 @@ import { Conflict } from "@/lib/errors";
 import { loadActor } from "@/lib/server/auth/load-actor";
 import { appLink } from "@/lib/server/mail/send-mail";
 import { signLink, verifyLink } from "@/lib/server/mail/signed-link";
-import { approvePromotion } from "./adapters/approve-promotion";
+import { approvePromotion } from "@/lib/server/promotions/approve-promotion";
 
 export const APPROVAL_LINK_DAYS = 7;
 
