@@ -17,7 +17,7 @@ import { usePendingWrites } from "./use-pending-writes";
 const DEFAULT_REST_SEC = 90; // common practice, no source
 
 /** The athlete's own day (`athleteId` omitted) or, for staff, any athlete's day. */
-export function TodayView({ athleteId }: { athleteId?: string }) {
+export function TodayView({ athleteId, title }: { athleteId?: string; title?: string }) {
   const url = athleteId ? `/api/v1/athletes/${athleteId}/today` : "/api/v1/me/today";
   const todayKey = useMemo(() => ["today", athleteId ?? "me"], [athleteId]);
   const endpoints = useMemo<TodayEndpoints>(() => ({ today: (date) => `${url}?date=${date}` }), [url]);
@@ -63,7 +63,7 @@ export function TodayView({ athleteId }: { athleteId?: string }) {
     <div className="flex flex-col gap-5">
       <header>
         <p className="text-sm text-muted">{new Date(`${data.date}T12:00:00Z`).toLocaleDateString(undefined, { weekday: "long", day: "numeric", month: "long", timeZone: "UTC" })}</p>
-        <h1 className="font-display text-3xl font-bold">{athleteId ? data.athleteName : "Today"}</h1>
+        <h1 className="font-display text-3xl font-bold">{title ?? data.athleteName}</h1>
       </header>
       {unsent > 0 ? (
         <Notice tone="ember">

@@ -6,11 +6,11 @@ import { requirePageActor } from "@/lib/server/auth/page-actor";
 export const metadata: Metadata = { title: "Today" };
 
 export default async function TodayPage() {
-  await requirePageActor("athlete");
+  const actor = await requirePageActor("athlete");
   return (
     <>
       <ServiceWorker />
-      <TodayView />
+      <TodayView title={`Hi ${actor.name.split(" ")[0]}`} />
     </>
   );
 }
