@@ -100,7 +100,7 @@ function hammer(baseUrl, world, options, sample) {
               n += 1;
               const key = `bench-${crypto.randomUUID()}`;
               const body = logBody(world, n, options.date);
-              if (sample.length < 200 && n % 7 === 0) sample.push({ key, body });
+              if (sample.length < 2000 && n % 3 === 0) sample.push({ key, body });
               return { ...request, body, headers: { ...request.headers, "idempotency-key": key } };
             },
           },
@@ -126,7 +126,17 @@ function hammer(baseUrl, world, options, sample) {
 }
 
 /** Replays sampled keys three times each, concurrently: every answer must be the first log, no new rows. */
-async function replays(baseUrl, dbUrl, world, sample) {
+async function replays(baseUrl, dbUrl, world, candidates) {
+  // Only keys whose first request completed (a run's last requests are cut off when it ends).
+  const check = new pg.Client({ connectionString: dbUrl });
+  await check.connect();
+  const { rows: done } = await check.query("select key from idempotency_keys where owner_id = $1 and state = 'done' and key = any($2)", [
+    world.ownerId,
+    candidates.map((c) => c.key),
+  ]);
+  await check.end();
+  const doneKeys = new Set(done.map((r) => r.key));
+  const sample = candidates.filter((c) => doneKeys.has(c.key)).slice(0, 100);
   const count = async () => {
     const c = new pg.Client({ connectionString: dbUrl });
     await c.connect();
@@ -161,6 +171,7 @@ async function replays(baseUrl, dbUrl, world, sample) {
   }
   const after = await count();
   return {
+    keys: sample.length,
     replayed: results.length,
     mismatches,
     rowsAdded: after.logs - before.logs,
@@ -169,9 +180,34 @@ async function replays(baseUrl, dbUrl, world, sample) {
   };
 }
 
+/** One request at a time: the latency of the request path itself, without queueing. */
+async function sequential(baseUrl, world, date, count = 30) {
+  const latencies = [];
+  for (let i = 0; i < count; i += 1) {
+    const t = performance.now();
+    const res = await fetch(`${baseUrl}/api/v1/logs`, {
+      method: "POST",
+      headers: { "content-type": "application/json", authorization: `Bearer ${world.token}`, "idempotency-key": `seq-${crypto.randomUUID()}` },
+      body: logBody(world, i, date),
+    });
+    await res.text();
+    latencies.push(performance.now() - t);
+  }
+  return percentiles(latencies);
+}
+
 export async function logBench({ baseUrl, dbUrl, seconds }) {
   const world = await seed(baseUrl, dbUrl);
   const date = new Date(Date.now() - 86_400_000).toISOString().slice(0, 10);
+  const single = await sequential(baseUrl, world, date);
+  const health = [];
+  for (let i = 0; i < 20; i += 1) {
+    const t = performance.now();
+    await (await fetch(`${baseUrl}/api/health`)).text();
+    health.push(performance.now() - t);
+  }
+  console.log(`[bench] GET /api/health one at a time: p50 ${round(percentiles(health).p50)} ms`);
+  console.log(`[bench] one request at a time: p50 ${round(single.p50)} ms, p95 ${round(single.p95)} ms`);
   const sample = [];
   // Warm the route (first compile of lazy chunks, pools) so it does not count against the runs.
   await hammer(baseUrl, world, { seconds: 3, connections: 10, date }, []);
@@ -189,7 +225,7 @@ export async function logBench({ baseUrl, dbUrl, seconds }) {
   return {
     name: "log",
     table: [row("(1) raw INSERT floor, 50 pg clients", floorResult), row("(2) POST /api/v1/logs, 50 conns", saturated), row("(3) POST /api/v1/logs, 200 req/s, 10 conns", fixed)],
-    summary: { ratio: round(ratio, 4), replay, goals },
+    summary: { ratio: round(ratio, 4), sequential: { p50: round(single.p50), p95: round(single.p95) }, replay, goals },
     raw: { floor: floorResult, saturated, fixed },
   };
 }
