@@ -53,6 +53,8 @@ export function usePendingWrites(athleteId: string | undefined, endpoints: Today
   }, [reload, flush]);
 
   const queue = useMutation({
+    // Never paused offline: the write must reach IndexedDB at once; sending waits for the network.
+    networkMode: "always",
     mutationFn: async (write: PendingWrite) => {
       await enqueue(write);
       await flush();

@@ -37,6 +37,9 @@ test("an athlete logs sets with the timer, keeps logging offline through a reloa
   await page.getByLabel("E-mail").fill(ATHLETE.email);
   await page.getByLabel("Password").fill(ATHLETE.password);
   await page.getByRole("button", { name: "Sign in" }).click();
+  // Signed in once the session cookie is set; then open Today directly.
+  await expect.poll(async () => (await context.cookies()).some((c) => c.name.endsWith("authjs.session-token")), { timeout: 30_000 }).toBe(true);
+  await page.goto("/today");
   await expect(page).toHaveURL(/\/today$/);
   await expect(page.getByRole("heading", { name: /^Hi / })).toBeVisible();
   await expect(page.getByText(/does not replace a qualified coach/).first()).toBeVisible();
@@ -72,8 +75,21 @@ test("an athlete logs sets with the timer, keeps logging offline through a reloa
   await expect(card.locator('[data-state="pending"]')).toHaveCount(2);
   await expect(page.getByTestId("pending-count")).toHaveText("2");
 
+  const dump = () => page.evaluate(() => new Promise<string>((resolve) => {
+    const req = indexedDB.open("rungwise-offline");
+    req.onsuccess = () => {
+      const tx = req.result.transaction("pending", "readonly");
+      const all = tx.objectStore("pending").getAll();
+      all.onsuccess = () => resolve(JSON.stringify(all.result));
+      all.onerror = () => resolve("err");
+    };
+    req.onerror = () => resolve("open err");
+  }));
+  // The unsent sets are on the device, not only on screen.
+  expect(JSON.parse(await dump())).toHaveLength(2);
   await page.reload();
   card = await open();
+
   await expect(card.locator('[data-state="pending"]')).toHaveCount(2);
   await expect(card.locator('[data-state="logged"]')).toHaveCount(start.sets + 3);
 
