@@ -5,16 +5,6 @@ import { logEntries } from "@/db/schema";
 import type { SetEntry } from "@/lib/engine/types";
 import type { LogDto, LogEntryDto } from "@/lib/validation/logs";
 
-export const LOG_COLUMNS = {
-  id: true,
-  athleteId: true,
-  performedOn: true,
-  durationMinutes: true,
-  sessionRpe: true,
-  enteredById: true,
-  createdAt: true,
-} as const;
-
 export interface LogRow {
   id: string;
   athleteId: string;
