@@ -33,6 +33,7 @@ async function logHeldSet(page: Page, card: ReturnType<Page["getByTestId"]>, sec
 }
 
 test("an athlete logs sets with the timer, keeps logging offline through a reload, and every set lands once", async ({ page, context }) => {
+  test.setTimeout(180_000); // a long journey: sign-in, service worker install, eight writes, two reloads
   await page.goto("/sign-in");
   await page.getByLabel("E-mail").fill(ATHLETE.email);
   await page.getByLabel("Password").fill(ATHLETE.password);
