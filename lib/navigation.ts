@@ -26,6 +26,7 @@ export const COACH_NAV: readonly NavItem[] = [
 
 export const ATHLETE_NAV: readonly NavItem[] = [
   { href: "/today", label: "Today", short: "Today", roles: ["athlete"] },
+  { href: "/history", label: "History", short: "History", roles: ["athlete"] },
   { href: "/settings", label: "Settings", short: "Me", roles: ["athlete"] },
 ];
 
