@@ -1,0 +1,1 @@
+CREATE INDEX "log_entries_athlete_ladder_date_idx" ON "log_entries" USING btree ("athlete_id","ladder_id","performed_on");
