@@ -13,6 +13,7 @@ export interface NavItem {
 }
 
 export const COACH_NAV: readonly NavItem[] = [
+  { href: "/coach/readiness", label: "This week", roles: ["owner", "coach"] },
   { href: "/coach/athletes", label: "Athletes", roles: ["owner", "coach"] },
   { href: "/coach/team", label: "Team", roles: ["owner", "coach"] },
   { href: "/settings", label: "Settings", roles: ["owner", "coach"] },
@@ -20,6 +21,7 @@ export const COACH_NAV: readonly NavItem[] = [
 
 export const ATHLETE_NAV: readonly NavItem[] = [
   { href: "/today", label: "Today", short: "Today", roles: ["athlete"] },
+  { href: "/progress", label: "Progress", short: "Progress", roles: ["athlete"] },
   { href: "/settings", label: "Settings", short: "Me", roles: ["athlete"] },
 ];
 
