@@ -1,6 +1,7 @@
 import type { SeedStep } from "../step";
 import { demoClub } from "./001-demo-club";
 import { starterLibrary } from "./002-starter-library";
+import { reviewWeek } from "./003-review-week";
 
 /** In order. Append new steps; never edit or reorder one that has shipped. */
-export const SEED_STEPS: readonly SeedStep[] = [demoClub, starterLibrary];
+export const SEED_STEPS: readonly SeedStep[] = [demoClub, starterLibrary, reviewWeek];
