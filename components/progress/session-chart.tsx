@@ -16,7 +16,7 @@ export function SessionChart({ ladder, unit }: { ladder: LadderProgress; unit: s
         <LineChart data={points} margin={{ top: 8, right: 12, bottom: 0, left: -16 }}>
           <CartesianGrid stroke="var(--line)" strokeDasharray="3 3" />
           <XAxis dataKey="date" tick={{ fontSize: 11, fill: "var(--muted)" }} />
-          <YAxis tick={{ fontSize: 11, fill: "var(--muted)" }} domain={[0, (max: number) => Math.max(max, target ?? 0) * 1.1]} />
+          <YAxis tick={{ fontSize: 11, fill: "var(--muted)" }} domain={[0, (max: number) => Math.ceil(Math.max(max, target ?? 0) * 1.1)]} />
           <Tooltip formatter={(value) => [`${String(value)} ${unit}`, "Best"]} />
           {target !== undefined ? (
             <ReferenceLine y={target} stroke="var(--moss)" strokeDasharray="6 4" label={{ value: "Standard", fill: "var(--moss)", fontSize: 11, position: "insideTopRight" }} />

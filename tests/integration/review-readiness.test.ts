@@ -6,6 +6,8 @@ import { GET as readinessRoute } from "@/app/api/v1/readiness/route";
 import { db } from "@/db/client";
 import { athletes } from "@/db/schema";
 import { addDays } from "@/lib/engine/calendar-date";
+import type { Actor } from "@/lib/server/actor";
+import { listReviewFilters } from "@/lib/server/readiness/list-review-filters";
 import { bearerFor, createAthleteRecord, createMember, createTeam } from "../support/factories";
 import { call } from "../support/http";
 import { appliedPromotion, createLadder, createSquad, logSession, pendingPromotion, placeAthlete } from "../support/review-factories";
@@ -35,6 +37,7 @@ interface Row {
 }
 
 let token = "";
+let ownerActor: Actor;
 let ids: Record<string, string> = {};
 let alpha = { ladderId: "", rungIds: [] as string[] };
 let beta = { ladderId: "", rungIds: [] as string[] };
@@ -54,6 +57,7 @@ beforeAll(async () => {
   const team = await createTeam();
   const { teamId, owner } = team;
   token = await bearerFor(owner);
+  ownerActor = owner;
   alpha = await createLadder(teamId, "Alpha ladder");
   beta = await createLadder(teamId, "Beta ladder");
   const quinn = await createAthleteRecord(teamId, QUINN);
@@ -166,6 +170,15 @@ describe("GET /api/v1/readiness", () => {
     const inWeek53 = new Date(2027, 0, 1); // 2027-01-01 is 2026-W53-5 (ISO 8601)
     expect(ok.data.weekStart).toBe(format(startOfISOWeek(inWeek53), "yyyy-MM-dd"));
     expect(ok.data.weekEnd).toBe(format(endOfISOWeek(inWeek53), "yyyy-MM-dd"));
+  });
+
+  it("offers the team's ladders as columns, shown by default when someone is placed on them", async () => {
+    const unused = await createLadder(ownerActor.teamId, "Zeta ladder");
+    const { ladders } = await listReviewFilters(ownerActor);
+    const byId = new Map(ladders.map((l) => [l.id, l.placed]));
+    expect(byId.get(alpha.ladderId)).toBe(true);
+    expect(byId.get(beta.ladderId)).toBe(true);
+    expect(byId.get(unused.ladderId)).toBe(false);
   });
 
   it("is for staff only", async () => {

@@ -11,7 +11,8 @@ export async function listReviewFilters(actor: Actor) {
       .select({
         id: ladders.id,
         name: ladders.name,
-        placed: sql<boolean>`exists (select 1 from athlete_positions p where p.ladder_id = ${ladders.id} and p.team_id = ${actor.teamId}::uuid)`,
+        // Written out in full: drizzle renders a lone column unqualified, which the subquery would resolve to p.id.
+        placed: sql<boolean>`exists (select 1 from athlete_positions p where p.ladder_id = "ladders"."id" and p.team_id = ${actor.teamId}::uuid)`,
       })
       .from(ladders)
       .where(and(eq(ladders.teamId, actor.teamId), isNull(ladders.archivedAt)))
