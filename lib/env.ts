@@ -9,7 +9,7 @@ export const ZEnv = z.object({
   DATABASE_URL: z.url({ protocol: /^postgres(ql)?$/, error: "DATABASE_URL must be a postgres:// URL" }),
   DATABASE_POOL_SIZE: z.coerce.number().int().min(1).max(200).default(10),
   AUTH_SECRET: z.string().min(32, "AUTH_SECRET must be at least 32 characters"),
-  APP_URL: z.url({ error: "APP_URL must be the absolute URL people open, e.g. http://localhost:3000" }),
+  APP_URL: z.url({ protocol: /^https?$/, error: "APP_URL must be the absolute URL people open, e.g. http://localhost:3000" }),
   PASSWORD_HASH_COST: z.coerce.number().int().min(4).max(15).default(12),
   SMTP_HOST: z.string().min(1).default("127.0.0.1"),
   SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(1025),

@@ -15,6 +15,9 @@ export interface NavItem {
 export const COACH_NAV: readonly NavItem[] = [
   { href: "/coach/readiness", label: "This week", roles: ["owner", "coach"] },
   { href: "/coach/athletes", label: "Athletes", roles: ["owner", "coach"] },
+  { href: "/coach/squads", label: "Squads", roles: ["owner", "coach"] },
+  { href: "/coach/blocks", label: "Blocks", roles: ["owner", "coach"] },
+  { href: "/coach/plans", label: "Plans", roles: ["owner", "coach"] },
   { href: "/coach/team", label: "Team", roles: ["owner", "coach"] },
   { href: "/settings", label: "Settings", roles: ["owner", "coach"] },
 ];

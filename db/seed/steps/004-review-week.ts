@@ -29,7 +29,7 @@ function wobble(a: number, b: number): number {
  * promotions waiting for approval, one athlete stalled on a rung and one pain flag this week.
  */
 export const reviewWeek: SeedStep = {
-  name: "003-review-week",
+  name: "004-review-week",
   async run(tx, { now }) {
     const team = await demoTeam(tx);
     const today = localDateOf(now, DEMO_CLUB.timeZone);
