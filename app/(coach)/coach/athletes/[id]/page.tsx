@@ -24,9 +24,14 @@ export default async function AthletePage({ params }: { params: Promise<{ id: st
         title={athlete.name}
         lead={athlete.email ?? "No e-mail: you log for this athlete."}
         actions={
-          <Link href={`/coach/athletes/${athlete.id}/today`} className={buttonClass("primary")}>
-            Today &amp; log sets
-          </Link>
+          <>
+            <Link href={`/coach/athletes/${athlete.id}/today`} className={buttonClass("primary")}>
+              Today &amp; log sets
+            </Link>
+            <Link href={`/coach/athletes/${athlete.id}/progress`} className={buttonClass("secondary")}>
+              Progress and load
+            </Link>
+          </>
         }
       />
       <AthleteProfile athlete={athlete} staff={staff} />
