@@ -3,6 +3,7 @@
 // PostgreSQL cluster and `next start`, seeds its own data, prints a table per bench and writes
 // scripts/bench/results/<bench>-<time>.json. Options: --only=log, --seconds=20, --skip-build.
 // Later issues add a file per bench and one line to BENCHES.
+import { spawnSync } from "node:child_process";
 import fs from "node:fs";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
@@ -11,11 +12,17 @@ import { logBench } from "./log-bench.mjs";
 import { printTable } from "./stats.mjs";
 
 const BENCHES = { log: logBench };
+/** Benches that run as their own process against this run's database (they print their own tables). */
+const STANDALONE = {
+  engine: ["tsx", ["scripts/bench/engine.ts"]],
+  readiness: ["node", ["scripts/bench/readiness.mjs"]],
+  digest: ["node", ["scripts/bench/digest.mjs"]],
+};
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "../..");
 const args = Object.fromEntries(process.argv.slice(2).map((a) => a.replace(/^--/, "").split("=")).map(([k, v]) => [k, v ?? "true"]));
 const seconds = Number(args.seconds ?? 20);
-const only = args.only ? args.only.split(",") : Object.keys(BENCHES);
+const only = args.only ? args.only.split(",") : [...Object.keys(BENCHES), ...Object.keys(STANDALONE)];
 const DIST_DIR = ".next-bench";
 
 async function main() {
@@ -42,7 +49,14 @@ async function main() {
   const baseUrl = await startApp(root, env, port);
   console.log(`[bench] app on ${baseUrl}`);
   fs.mkdirSync(path.join(root, "scripts/bench/results"), { recursive: true });
-  for (const name of only) {
+  for (const name of only.filter((n) => STANDALONE[n])) {
+    const [command, commandArgs] = STANDALONE[name];
+    console.log(`\n[bench] ${name}`);
+    const bin = command === "tsx" ? path.join(root, "node_modules/.bin/tsx") : process.execPath;
+    const result = spawnSync(bin, commandArgs, { cwd: root, env: { ...env, DATABASE_URL: pgInfo.url }, stdio: "inherit" });
+    if (result.status !== 0) console.error(`[bench] ${name} exited with ${result.status}`);
+  }
+  for (const name of only.filter((n) => !STANDALONE[n])) {
     const bench = BENCHES[name];
     if (!bench) throw new Error(`unknown bench "${name}" (have: ${Object.keys(BENCHES).join(", ")})`);
     console.log(`\n[bench] ${name} (${seconds} s per run)`);
