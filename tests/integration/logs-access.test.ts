@@ -4,7 +4,8 @@ import { GET as athleteToday } from "@/app/api/v1/athletes/[id]/today/route";
 import { GET as myToday } from "@/app/api/v1/me/today/route";
 import { addDays } from "@/lib/engine/calendar-date";
 import { localDateOf } from "@/lib/engine/local-date";
-import { loadSessions } from "@/lib/server/logs/load-sessions";
+import { db } from "@/db/client";
+import { loadRungSessions } from "@/lib/server/promotions/load-rung-sessions";
 import { bearerFor, createAthleteRecord, createMember, createTeam } from "../support/factories";
 import { call } from "../support/http";
 import { placeOn, postLogAs } from "../support/logging-factories";
@@ -79,12 +80,12 @@ describe("who may log for whom", () => {
     }
     const yesterday = addDays(day, -1);
     expect((await postLogAs(token, { performedOn: yesterday, entries: [{ rungId: rung.rungId, sets: [{ value: 18 }], pain: false }] })).status).toBe(201);
-    const sessions = await loadSessions(me.actor.athleteId!, rung.rungId, addDays(day, -7));
+    const sessions = await loadRungSessions(db, { athleteId: me.actor.athleteId!, rungId: rung.rungId, since: addDays(day, -7) });
     expect(sessions).toHaveLength(2);
     expect(sessions[0]).toEqual({ date: day, sets: [{ value: 20, rpe: 7 }, { value: 25, rpe: 7 }, { value: 30, rpe: 7 }], pain: true });
     expect(sessions[1]).toEqual({ date: yesterday, sets: [{ value: 18 }], pain: false });
     // `since` is inclusive and cuts older sessions.
-    expect(await loadSessions(me.actor.athleteId!, rung.rungId, day)).toHaveLength(1);
+    expect(await loadRungSessions(db, { athleteId: me.actor.athleteId!, rungId: rung.rungId, since: day })).toHaveLength(1);
   });
 
   it("accepts an easier rung of a placed ladder but only reports the current rung's entries to promotion", async () => {

@@ -5,7 +5,7 @@ import { db } from "@/db/client";
 import { auditEvents, logEntries, logs } from "@/db/schema";
 import { addDays } from "@/lib/engine/calendar-date";
 import { localDateOf } from "@/lib/engine/local-date";
-import { loadSessions } from "@/lib/server/logs/load-sessions";
+import { loadRungSessions } from "@/lib/server/promotions/load-rung-sessions";
 import { bearerFor, createMember, createTeam } from "../support/factories";
 import { call } from "../support/http";
 import { placeOn, postLogAs, starterRung } from "../support/logging-factories";
@@ -84,7 +84,7 @@ describe("editing and deleting logs", () => {
     const log = await logOn(token, rung.rungId, today);
     const res = await call(deleteLog, { method: "DELETE", token, params: { id: log.id } });
     expect(res.status).toBe(204);
-    expect(await loadSessions(me.actor.athleteId!, rung.rungId, addDays(today, -30))).toEqual([]);
+    expect(await loadRungSessions(db, { athleteId: me.actor.athleteId!, rungId: rung.rungId, since: addDays(today, -30) })).toEqual([]);
     const entries = await db.select({ deletedAt: logEntries.deletedAt }).from(logEntries).where(eq(logEntries.logId, log.id));
     expect(entries[0]!.deletedAt).not.toBeNull();
     const audits = await db.select().from(auditEvents).where(and(eq(auditEvents.subjectId, log.id), eq(auditEvents.action, "log.deleted")));
