@@ -24,7 +24,9 @@ describe("POST /api/v1/logs idempotency", () => {
     const key = newKey();
     const first = await postLogAs(token, body, key);
     expect(first.status).toBe(201);
-    expect(first.data).toMatchObject({ athleteId: actor.athleteId, performedOn: today, enteredById: actor.userId, verdicts: [] });
+    expect(first.data).toMatchObject({ athleteId: actor.athleteId, performedOn: today, enteredById: actor.userId });
+    // One set of 25 s is one session that does not meet a 3-set standard: an explained "not yet".
+    expect(first.data.verdicts).toMatchObject([{ rungId: rung.rungId, status: "not_yet", promotedTo: null }]);
     // Same body with keys in another order: the canonical hash is the same.
     const second = await postLogAs(token, { entries: body.entries, performedOn: today }, key);
     expect(second.status).toBe(201);
