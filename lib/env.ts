@@ -17,6 +17,18 @@ export const ZEnv = z.object({
   SMTP_PASSWORD: z.string().optional(),
   SMTP_SECURE: z.stringbool().default(false),
   MAIL_FROM: z.string().min(3).default("Rungwise <no-reply@rungwise.test>"),
+  // S3-compatible storage for form checks; the defaults match the local fake `npm start` runs.
+  S3_ENDPOINT: z.url({ error: "S3_ENDPOINT must be an absolute URL" }).default("http://127.0.0.1:4569"),
+  S3_REGION: z.string().min(1).default("us-east-1"),
+  S3_BUCKET: z.string().min(3).max(63).default("rungwise"),
+  S3_ACCESS_KEY_ID: z.string().min(1).default("S3RVER"),
+  S3_SECRET_ACCESS_KEY: z.string().min(1).default("S3RVER"),
+  S3_FORCE_PATH_STYLE: z.stringbool().default(true),
+  /** Largest video and image a form check accepts, in bytes (200 MB and 15 MB). */
+  UPLOAD_MAX_VIDEO_BYTES: z.coerce.number().int().min(1).default(200 * 1024 * 1024),
+  UPLOAD_MAX_IMAGE_BYTES: z.coerce.number().int().min(1).default(15 * 1024 * 1024),
+  /** Storage each athlete may fill with form checks, in bytes (2 GB). */
+  UPLOAD_ATHLETE_QUOTA_BYTES: z.coerce.number().int().min(1).default(2 * 1024 * 1024 * 1024),
 });
 
 export type Env = z.infer<typeof ZEnv>;

@@ -5,3 +5,4 @@ export * from "./ladders";
 export * from "./training";
 export * from "./logs";
 export * from "./promotions";
+export * from "./form-checks";
