@@ -14,12 +14,14 @@ export interface NavItem {
 
 export const COACH_NAV: readonly NavItem[] = [
   { href: "/coach/athletes", label: "Athletes", roles: ["owner", "coach"] },
+  { href: "/coach/form-checks", label: "Form checks", roles: ["owner", "coach"] },
   { href: "/coach/team", label: "Team", roles: ["owner", "coach"] },
   { href: "/settings", label: "Settings", roles: ["owner", "coach"] },
 ];
 
 export const ATHLETE_NAV: readonly NavItem[] = [
   { href: "/today", label: "Today", short: "Today", roles: ["athlete"] },
+  { href: "/form-checks", label: "Form checks", short: "Form", roles: ["athlete"] },
   { href: "/settings", label: "Settings", short: "Me", roles: ["athlete"] },
 ];
 
