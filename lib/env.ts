@@ -9,7 +9,7 @@ export const ZEnv = z.object({
   DATABASE_URL: z.url({ protocol: /^postgres(ql)?$/, error: "DATABASE_URL must be a postgres:// URL" }),
   DATABASE_POOL_SIZE: z.coerce.number().int().min(1).max(200).default(10),
   AUTH_SECRET: z.string().min(32, "AUTH_SECRET must be at least 32 characters"),
-  APP_URL: z.url({ error: "APP_URL must be the absolute URL people open, e.g. http://localhost:3000" }),
+  APP_URL: z.url({ protocol: /^https?$/, error: "APP_URL must be the absolute URL people open, e.g. http://localhost:3000" }),
   PASSWORD_HASH_COST: z.coerce.number().int().min(4).max(15).default(12),
   SMTP_HOST: z.string().min(1).default("127.0.0.1"),
   SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(1025),
@@ -17,18 +17,6 @@ export const ZEnv = z.object({
   SMTP_PASSWORD: z.string().optional(),
   SMTP_SECURE: z.stringbool().default(false),
   MAIL_FROM: z.string().min(3).default("Rungwise <no-reply@rungwise.test>"),
-  // S3-compatible storage for form checks; the defaults match the local fake `npm start` runs.
-  S3_ENDPOINT: z.url({ error: "S3_ENDPOINT must be an absolute URL" }).default("http://127.0.0.1:4569"),
-  S3_REGION: z.string().min(1).default("us-east-1"),
-  S3_BUCKET: z.string().min(3).max(63).default("rungwise"),
-  S3_ACCESS_KEY_ID: z.string().min(1).default("S3RVER"),
-  S3_SECRET_ACCESS_KEY: z.string().min(1).default("S3RVER"),
-  S3_FORCE_PATH_STYLE: z.stringbool().default(true),
-  /** Largest video and image a form check accepts, in bytes (200 MB and 15 MB). */
-  UPLOAD_MAX_VIDEO_BYTES: z.coerce.number().int().min(1).default(200 * 1024 * 1024),
-  UPLOAD_MAX_IMAGE_BYTES: z.coerce.number().int().min(1).default(15 * 1024 * 1024),
-  /** Storage each athlete may fill with form checks, in bytes (2 GB). */
-  UPLOAD_ATHLETE_QUOTA_BYTES: z.coerce.number().int().min(1).default(2 * 1024 * 1024 * 1024),
 });
 
 export type Env = z.infer<typeof ZEnv>;
@@ -48,4 +36,41 @@ let cached: Env | undefined;
 export function env(): Env {
   cached ??= parseEnv(process.env);
   return cached;
+}
+
+/**
+ * S3-compatible storage and upload limits for form checks, validated on first use. Kept as its own
+ * schema so a missing bucket setting never blocks the rest of the app from starting; the defaults
+ * match the local fake that `npm start` runs.
+ */
+export const ZStorageEnv = z.object({
+  S3_ENDPOINT: z.url({ protocol: /^https?$/, error: "S3_ENDPOINT must be an http(s) URL" }).default("http://127.0.0.1:4569"),
+  S3_REGION: z.string().min(1).default("us-east-1"),
+  S3_BUCKET: z.string().min(3).max(63).default("rungwise"),
+  S3_ACCESS_KEY_ID: z.string().min(1).default("S3RVER"),
+  S3_SECRET_ACCESS_KEY: z.string().min(1).default("S3RVER"),
+  S3_FORCE_PATH_STYLE: z.stringbool().default(true),
+  /** Largest video and image a form check accepts, in bytes (200 MB and 15 MB). */
+  UPLOAD_MAX_VIDEO_BYTES: z.coerce.number().int().min(1).default(200 * 1024 * 1024),
+  UPLOAD_MAX_IMAGE_BYTES: z.coerce.number().int().min(1).default(15 * 1024 * 1024),
+  /** Storage each athlete may fill with form checks, in bytes (2 GB). */
+  UPLOAD_ATHLETE_QUOTA_BYTES: z.coerce.number().int().min(1).default(2 * 1024 * 1024 * 1024),
+});
+
+export type StorageEnv = z.infer<typeof ZStorageEnv>;
+
+export function parseStorageEnv(source: Record<string, string | undefined>): StorageEnv {
+  const result = ZStorageEnv.safeParse(source);
+  if (!result.success) {
+    const lines = result.error.issues.map((i) => `  - ${i.path.join(".") || "(env)"}: ${i.message}`);
+    throw new Error(`Invalid storage configuration:\n${lines.join("\n")}`);
+  }
+  return result.data;
+}
+
+let cachedStorage: StorageEnv | undefined;
+
+export function storageEnv(): StorageEnv {
+  cachedStorage ??= parseStorageEnv(process.env);
+  return cachedStorage;
 }

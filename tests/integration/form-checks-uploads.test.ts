@@ -203,3 +203,48 @@ describe("form-check access", () => {
     expect(forged.status).toBe(422);
   });
 });
+
+describe("form-check bad input never becomes a 500", () => {
+  it.each([
+    ["{not json", 400],
+    ["[]", 422],
+    [JSON.stringify({ contentType: "video/webm", size: "12", purpose: "form_check" }), 422],
+    [JSON.stringify({ contentType: "video/webm", size: 1.5, purpose: "form_check" }), 422],
+    [JSON.stringify({ contentType: "video/webm", size: 1e300, purpose: "form_check" }), 422],
+    [JSON.stringify({ contentType: "video/webm", size: 10, purpose: "form_check", extra: 1 }), 422],
+    [JSON.stringify({ contentType: "video/webm", size: 10, purpose: "form_check", athleteId: "x" }), 422],
+    [JSON.stringify({ contentType: "video/webm", size: 10, purpose: "form_check", fileName: "x".repeat(400) }), 422],
+  ])("POST /api/v1/uploads with %s → %i", async (rawBody, status) => {
+    const t = await teamWithAthlete();
+    const { POST } = await import("@/app/api/v1/uploads/route");
+    const res = await call(POST, { token: t.athleteToken, rawBody, headers: { "content-type": "application/json" }, method: "POST" });
+    expect(res.status).toBe(status);
+    expect(res.data.error?.code).toBeTruthy();
+  });
+
+  it("answers 404 for ids that are not UUIDs, and 422 for bad comments, posters and links", async () => {
+    const t = await teamWithAthlete();
+    expect((await complete(t.athleteToken, "../../staging")).status).toBe(404);
+    expect((await call(getRoute, { token: t.staffToken, params: { id: "1 or 1=1" } })).status).toBe(404);
+    const id = await createFormCheckFor(t.athleteToken);
+    for (const json of [{ atSeconds: "2", body: "x" }, { atSeconds: 2 }, { atSeconds: 2, body: "x".repeat(1001) }, { atSeconds: 1e9, body: "x" }]) {
+      expect((await call(commentRoute, { token: t.staffToken, params: { id }, json })).status).toBe(422);
+    }
+    const uploadId = await uploadFile(t.athleteToken, { contentType: "video/webm", bytes: fileOf("video/webm", 500) });
+    for (const json of [
+      { uploadId, poster: "data:image/svg+xml;base64,PHN2Zz4=" },
+      { uploadId, poster: `data:image/jpeg;base64,${"A".repeat(200_000)}` },
+      { uploadId, rungId: crypto.randomUUID() },
+      { uploadId, logId: crypto.randomUUID() },
+      { uploadId, athleteId: crypto.randomUUID() },
+    ]) {
+      const res = await call(createFormCheckRoute, { token: t.athleteToken, json });
+      expect([413, 422]).toContain(res.status);
+    }
+    const ok = await call(createFormCheckRoute, { token: t.athleteToken, json: { uploadId, poster: "data:image/jpeg;base64,/9j/4AAQ" } });
+    expect(ok.status).toBe(201);
+    expect(ok.data.poster).toBe("data:image/jpeg;base64,/9j/4AAQ");
+    // One upload, one form check.
+    expect((await call(createFormCheckRoute, { token: t.athleteToken, json: { uploadId } })).status).toBe(409);
+  });
+});

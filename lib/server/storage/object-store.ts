@@ -10,7 +10,7 @@ import {
   S3ServiceException,
 } from "@aws-sdk/client-s3";
 import { getSignedUrl } from "@aws-sdk/s3-request-presigner";
-import { env } from "@/lib/env";
+import { storageEnv } from "@/lib/env";
 
 /**
  * The one door to S3-compatible storage. Endpoint, bucket and keys come from the environment, so the
@@ -21,7 +21,7 @@ let client: S3Client | undefined;
 
 function s3(): S3Client {
   if (client) return client;
-  const config = env();
+  const config = storageEnv();
   client = new S3Client({
     endpoint: config.S3_ENDPOINT,
     region: config.S3_REGION,
@@ -33,7 +33,7 @@ function s3(): S3Client {
   return client;
 }
 
-const bucket = () => env().S3_BUCKET;
+const bucket = () => storageEnv().S3_BUCKET;
 
 /** A presigned PUT for one object; the browser must send exactly `headers`. */
 export async function presignPut(key: string, contentType: string, expiresInSeconds: number) {

@@ -1,5 +1,5 @@
 import "server-only";
-import { env } from "@/lib/env";
+import { storageEnv } from "@/lib/env";
 import { isVideoType, type MediaType } from "@/lib/validation/form-checks";
 import { extensionOf } from "@/lib/server/storage/media-signature";
 
@@ -10,12 +10,12 @@ export const PENDING_RESERVATION_MS = 60 * 60 * 1000;
 export const GET_URL_SECONDS = 5 * 60;
 
 export function maxBytesFor(type: MediaType): number {
-  const config = env();
+  const config = storageEnv();
   return isVideoType(type) ? config.UPLOAD_MAX_VIDEO_BYTES : config.UPLOAD_MAX_IMAGE_BYTES;
 }
 
 export function athleteQuotaBytes(): number {
-  return env().UPLOAD_ATHLETE_QUOTA_BYTES;
+  return storageEnv().UPLOAD_ATHLETE_QUOTA_BYTES;
 }
 
 export function megabytes(bytes: number): string {
