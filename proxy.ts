@@ -1,8 +1,8 @@
 import { NextResponse, type NextRequest } from "next/server";
+import { hasSessionCookie } from "@/lib/session-cookies";
 
 const PUBLIC = ["/", "/sign-in", "/sign-up", "/forgot-password"];
-const PUBLIC_PREFIXES = ["/invite/", "/reset-password/"];
-const SESSION_COOKIES = ["authjs.session-token", "__Secure-authjs.session-token"];
+const PUBLIC_PREFIXES = ["/invite/", "/reset-password/", "/approve/", "/unsubscribe/"];
 
 /**
  * Only a convenience redirect for signed-out visitors on pages. It never authorizes anything: every
@@ -12,8 +12,7 @@ const SESSION_COOKIES = ["authjs.session-token", "__Secure-authjs.session-token"
 export function proxy(request: NextRequest) {
   const { pathname } = request.nextUrl;
   if (PUBLIC.includes(pathname) || PUBLIC_PREFIXES.some((p) => pathname.startsWith(p))) return NextResponse.next();
-  const hasSession = SESSION_COOKIES.some((name) => request.cookies.has(name));
-  if (hasSession) return NextResponse.next();
+  if (hasSessionCookie(request.headers.get("cookie"))) return NextResponse.next();
   const url = new URL("/sign-in", request.url);
   return NextResponse.redirect(url);
 }

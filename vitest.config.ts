@@ -9,6 +9,9 @@ export default defineConfig({
     },
   },
   test: {
+    // next-auth imports "next/server" without an extension, which Node's ESM resolver refuses;
+    // letting Vite process it resolves the import the way Next's bundler does.
+    server: { deps: { inline: ["next-auth", "@auth/core"] } },
     include: ["lib/**/*.test.ts", "tests/unit/**/*.test.ts", "tests/integration/**/*.test.ts"],
     globalSetup: ["tests/support/global-setup.ts"],
     setupFiles: ["tests/support/setup.ts"],

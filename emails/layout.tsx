@@ -1,10 +1,19 @@
-import { Body, Container, Head, Hr, Html, Preview, Section, Text } from "@react-email/components";
+import { Body, Container, Head, Hr, Html, Link, Preview, Section, Text } from "@react-email/components";
 import type { ReactNode } from "react";
 
 const palette = { ink: "#1c2321", chalk: "#f6f3ec", rung: "#d9622b", moss: "#2f5d50", muted: "#6b6f68" };
 
 /** The frame every Rungwise e-mail shares: wordmark, content, a plain footer. */
-export function EmailLayout({ preview, children }: { preview: string; children: ReactNode }) {
+export function EmailLayout({
+  preview,
+  children,
+  unsubscribeUrl,
+}: {
+  preview: string;
+  children: ReactNode;
+  /** Signed link that stops this kind of mail; security mail (invites, resets) has none. */
+  unsubscribeUrl?: string;
+}) {
   return (
     <Html lang="en">
       <Head />
@@ -20,6 +29,15 @@ export function EmailLayout({ preview, children }: { preview: string; children: 
             Rungwise helps coaches and athletes track progressions. It does not replace a qualified coach,
             physiotherapist or physician.
           </Text>
+          {unsubscribeUrl ? (
+            <Text style={{ fontSize: 12, color: palette.muted }}>
+              Don't want these?{" "}
+              <Link href={unsubscribeUrl} style={{ color: palette.moss }}>
+                Unsubscribe
+              </Link>{" "}
+              or choose what you get under Settings.
+            </Text>
+          ) : null}
         </Container>
       </Body>
     </Html>
@@ -39,4 +57,7 @@ export const emailStyles = {
     display: "inline-block",
   },
   small: { fontSize: 12, color: palette.muted, lineHeight: "18px" },
+  subheading: { fontSize: 15, fontWeight: 700, margin: "16px 0 6px" },
+  caution: { fontSize: 14, lineHeight: "20px", margin: "0 0 12px", padding: "8px 12px", borderLeft: `3px solid ${palette.rung}` },
+  item: { fontSize: 14, lineHeight: "20px", margin: "0 0 4px" },
 } as const;

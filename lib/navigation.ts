@@ -15,8 +15,14 @@ export interface NavItem {
 export const COACH_NAV: readonly NavItem[] = [
   { href: "/coach/athletes", label: "Athletes", roles: ["owner", "coach"] },
   { href: "/coach/form-checks", label: "Form checks", roles: ["owner", "coach"] },
+  { href: "/coach/approvals", label: "Approvals", roles: ["owner", "coach"] },
+  { href: "/coach/ladders", label: "Ladders", roles: ["owner", "coach"] },
+  { href: "/coach/squads", label: "Squads", roles: ["owner", "coach"] },
+  { href: "/coach/blocks", label: "Blocks", roles: ["owner", "coach"] },
+  { href: "/coach/plans", label: "Plans", roles: ["owner", "coach"] },
   { href: "/coach/team", label: "Team", roles: ["owner", "coach"] },
   { href: "/settings", label: "Settings", roles: ["owner", "coach"] },
+  { href: "/coach/admin/jobs", label: "Mail jobs", roles: ["owner"] },
 ];
 
 export const ATHLETE_NAV: readonly NavItem[] = [

@@ -18,6 +18,7 @@ export const PERMISSIONS = {
   "team.manage": ["owner"],
   "ladders.read": EVERYONE,
   "ladders.write": STAFF,
+  "ladders.backtest": STAFF, // what-if replays read every athlete's sessions on a rung
   "positions.read": EVERYONE,
   "positions.write": STAFF,
   "squads.read": STAFF,

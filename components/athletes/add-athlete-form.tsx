@@ -20,7 +20,7 @@ export function AddAthleteForm({ staff, me }: { staff: StaffMember[]; me: string
   const [message, setMessage] = useState<{ tone: "moss" | "danger"; text: string } | null>(null);
   const form = useForm<FormIn, unknown, FormOut>({
     resolver: zodResolver(ZCreateAthlete),
-    defaultValues: { name: "", email: undefined, primaryCoachId: me, invite: true },
+    defaultValues: { name: "", email: "", primaryCoachId: me, invite: true },
   });
   const create = useMutation({
     mutationFn: (values: FormOut) => api<AthleteDto>("/api/v1/athletes", { method: "POST", json: values }),
@@ -29,7 +29,7 @@ export function AddAthleteForm({ staff, me }: { staff: StaffMember[]; me: string
         tone: "moss",
         text: values.invite && values.email ? `${athlete.name} added; the invite is on its way.` : `${athlete.name} added.`,
       });
-      form.reset({ name: "", email: undefined, primaryCoachId: me, invite: true });
+      form.reset({ name: "", email: "", primaryCoachId: me, invite: true });
       void queryClient.invalidateQueries({ queryKey: ["athletes"] });
     },
     onError: (error) => setMessage({ tone: "danger", text: applyIssues(error, form.setError) }),

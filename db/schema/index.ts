@@ -5,4 +5,5 @@ export * from "./ladders";
 export * from "./training";
 export * from "./logs";
 export * from "./promotions";
+export * from "./notifications";
 export * from "./form-checks";

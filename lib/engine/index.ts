@@ -7,6 +7,7 @@ export { evaluate } from "./evaluate";
 export { READINESS_WEIGHTS, readinessScore, type ReadinessInput } from "./readiness";
 export { mergeSessions, sessionsInRange } from "./merge-sessions";
 export { isEachSide, setValue, setMeetsValue, setQualifies } from "./set-value";
+export { assessSession, sessionBest, type SessionAssessment } from "./session-assessment";
 export { checkStepDown, stepDownRuleOf } from "./step-down";
 export { explainVerdict, explainClause, waitingText } from "./explain";
 export { describeStandard, effortCeilingText } from "./standard-text";

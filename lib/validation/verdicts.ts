@@ -27,6 +27,8 @@ export const ZVerdictDto = z
     promotedTo: z.uuid().nullable(),
     /** The proposal waiting for a coach (approve ladders, step-downs), else null. */
     pendingPromotionId: z.uuid().nullable(),
+    /** True when this verdict finished the ladder: the skill is achieved (auto ladders). */
+    achieved: z.boolean().optional(),
   })
   .meta({ id: "Verdict" });
 export type VerdictDto = z.infer<typeof ZVerdictDto>;

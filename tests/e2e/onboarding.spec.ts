@@ -17,6 +17,7 @@ test("a coach signs up, invites an athlete, and the athlete joins from a phone",
   await expect(page.getByRole("heading", { name: "Athletes" })).toBeVisible();
   await expect(page.getByText("No athletes yet")).toBeVisible();
 
+  test.setTimeout(180_000); // a long journey across two browsers
   const form = page.getByRole("complementary");
   await form.getByLabel("Name").fill("Milo Fenn");
   await form.getByLabel("E-mail (optional)").fill(athleteEmail);

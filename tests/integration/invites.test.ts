@@ -13,6 +13,7 @@ import { resetPassword } from "@/lib/server/passwords/reset-password";
 import { bearerFor, createMember, createTeam, uniqueEmail } from "../support/factories";
 import { call } from "../support/http";
 import { firstLink, waitForMail } from "../support/mail";
+import { drainQueue } from "../support/queue";
 
 const noHeaders = new Headers();
 
@@ -24,6 +25,7 @@ describe("invites", () => {
     expect(res.status).toBe(201);
     expect(res.data.invitePending).toBe(true);
 
+    await drainQueue(); // the worker sends it
     const [mail] = await waitForMail(email);
     expect(mail?.subject).toContain("invited you");
     expect(mail?.html).toContain("<");
@@ -48,6 +50,7 @@ describe("invites", () => {
     const { owner } = await createTeam();
     const email = uniqueEmail("late");
     await call(createAthleteRoute, { token: await bearerFor(owner), json: { name: "Late", email, invite: true } });
+    await drainQueue();
     const token = firstLink((await waitForMail(email))[0]!, "/invite/").split("/invite/")[1]!;
     await db.update(invites).set({ expiresAt: new Date(Date.now() - 1000) }).where(eq(invites.email, email));
     expect(await findInvite(token)).toBeNull();
@@ -60,6 +63,7 @@ describe("invites", () => {
     const email = uniqueEmail("newcoach");
     expect((await call(inviteCoachRoute, { token: await bearerFor(coach), json: { email } })).status).toBe(403);
     expect((await call(inviteCoachRoute, { token: await bearerFor(owner), json: { email } })).status).toBe(201);
+    await drainQueue();
     const token = firstLink((await waitForMail(email))[0]!, "/invite/").split("/invite/")[1]!;
     const { userId } = await acceptInvite(token, { name: "New Coach", password: "a-strong-password" });
     expect((await loadActor(userId))?.role).toBe("coach");
@@ -70,6 +74,7 @@ describe("password reset", () => {
   it("e-mails a one-time link that sets a new password", async () => {
     const { ownerEmail } = await createTeam();
     await requestPasswordReset(ownerEmail);
+    await drainQueue();
     const [mail] = await waitForMail(ownerEmail);
     const token = firstLink(mail!, "/reset-password/").split("/reset-password/")[1]!;
     await resetPassword(token, "a-brand-new-password");
@@ -80,6 +85,7 @@ describe("password reset", () => {
   it("sends nothing for an unknown address", async () => {
     const email = uniqueEmail("nobody");
     await requestPasswordReset(email);
+    await drainQueue();
     expect(await waitForMail(email, 1, 800)).toHaveLength(0);
   });
 });

@@ -1,12 +1,16 @@
 import type { Metadata } from "next";
 import { ApiTokens } from "@/components/settings/api-tokens";
+import { NotificationPreferencesForm } from "@/components/settings/notification-preferences-form";
 import { Card, PageHeader } from "@/components/ui/card";
 import { requirePageActor } from "@/lib/server/auth/page-actor";
+import { getPreferences } from "@/lib/server/notifications/get-preferences";
+import { isStaff } from "@/lib/permissions";
 
 export const metadata: Metadata = { title: "Settings" };
 
 export default async function SettingsPage() {
   const actor = await requirePageActor();
+  const preferences = await getPreferences(actor);
   return (
     <>
       <PageHeader title="Settings" />
@@ -24,6 +28,7 @@ export default async function SettingsPage() {
             <dd>{actor.timeZone}</dd>
           </dl>
         </Card>
+        <NotificationPreferencesForm initial={preferences} staff={isStaff(actor.role)} timeZone={actor.timeZone} />
         <ApiTokens />
       </div>
     </>

@@ -1,6 +1,6 @@
 "use server";
 
-import { signIn } from "@/auth";
+import { signInAndGoHome } from "@/lib/server/auth/sign-in-and-go-home";
 import { AppError } from "@/lib/errors";
 import { acceptInvite } from "@/lib/server/invites/accept-invite";
 import { ZAcceptInvite, type AcceptInviteInput } from "@/lib/validation/auth";
@@ -16,6 +16,5 @@ export async function acceptInviteAction(token: string, input: AcceptInviteInput
     if (error instanceof AppError) return { error: error.message };
     throw error;
   }
-  await signIn("credentials", { email, password: parsed.data.password, redirectTo: "/home" });
-  return {};
+  return signInAndGoHome(email, parsed.data.password);
 }

@@ -1,6 +1,6 @@
 "use server";
 
-import { signIn } from "@/auth";
+import { signInAndGoHome } from "@/lib/server/auth/sign-in-and-go-home";
 import { AppError } from "@/lib/errors";
 import { requestPasswordReset } from "@/lib/server/passwords/request-password-reset";
 import { resetPassword } from "@/lib/server/passwords/reset-password";
@@ -24,6 +24,5 @@ export async function resetPasswordAction(token: string, input: { password: stri
     if (error instanceof AppError) return { error: error.message };
     throw error;
   }
-  await signIn("credentials", { email, password: parsed.data.password, redirectTo: "/home" });
-  return {};
+  return signInAndGoHome(email, parsed.data.password);
 }

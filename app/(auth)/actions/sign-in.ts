@@ -2,7 +2,7 @@
 
 import { AuthError } from "next-auth";
 import { headers } from "next/headers";
-import { signIn } from "@/auth";
+import { signInAndGoHome } from "@/lib/server/auth/sign-in-and-go-home";
 import { clientIp, signInRetryAfter, throttleKey } from "@/lib/server/auth/sign-in-throttle";
 import { ZSignIn, type SignInInput } from "@/lib/validation/auth";
 import { fieldErrorsOf, type FormResult } from "./form-result";
@@ -15,8 +15,7 @@ export async function signInAction(input: SignInInput): Promise<FormResult> {
     return { error: `Too many failed attempts. Try again in ${Math.ceil(retryAfter / 60)} minutes, or reset your password.` };
   }
   try {
-    await signIn("credentials", { ...parsed.data, redirectTo: "/home" });
-    return {};
+    return await signInAndGoHome(parsed.data.email, parsed.data.password);
   } catch (error) {
     // signIn throws a redirect on success: only Auth.js errors are a failed sign-in.
     if (error instanceof AuthError) return { error: "That e-mail and password don't match an account." };

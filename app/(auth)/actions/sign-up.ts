@@ -1,6 +1,6 @@
 "use server";
 
-import { signIn } from "@/auth";
+import { signInAndGoHome } from "@/lib/server/auth/sign-in-and-go-home";
 import { AppError } from "@/lib/errors";
 import { signUp } from "@/lib/server/auth/sign-up";
 import { ZSignUp, type SignUpInput } from "@/lib/validation/auth";
@@ -15,6 +15,5 @@ export async function signUpAction(input: SignUpInput): Promise<FormResult> {
     if (error instanceof AppError) return { error: error.message };
     throw error;
   }
-  await signIn("credentials", { email: parsed.data.email, password: parsed.data.password, redirectTo: "/coach" });
-  return {};
+  return signInAndGoHome(parsed.data.email, parsed.data.password);
 }

@@ -2,7 +2,7 @@ import "server-only";
 import { db } from "@/db/client";
 import { athletes } from "@/db/schema";
 import type { Actor } from "@/lib/server/actor";
-import { createInvite, sendInviteEmail } from "@/lib/server/invites/create-invite";
+import { createInvite } from "@/lib/server/invites/create-invite";
 import type { CreateAthleteInput } from "@/lib/validation/athletes";
 import { assertCoachInTeam } from "./assert-coach-in-team";
 import { assertEmailFree } from "./assert-email-free";
@@ -10,11 +10,12 @@ import { getAthlete } from "./get-athlete";
 
 /**
  * A new athlete record in the actor's team. Without an e-mail (or without `invite`) it is a record the
- * coach logs for; with `invite: true` a single-use sign-up link goes out.
+ * coach logs for; with `invite: true` a single-use sign-up link is queued for
+ * mail in the same transaction.
  */
 export async function createAthlete(actor: Actor, input: CreateAthleteInput) {
   const primaryCoachId = input.primaryCoachId ?? actor.userId;
-  const { athleteId, invite } = await db.transaction(async (tx) => {
+  const { athleteId } = await db.transaction(async (tx) => {
     await assertCoachInTeam(tx, actor.teamId, primaryCoachId);
     if (input.email) await assertEmailFree(tx, actor.teamId, input.email);
     const [row] = await tx
@@ -34,6 +35,5 @@ export async function createAthlete(actor: Actor, input: CreateAthleteInput) {
         : null;
     return { athleteId, invite };
   });
-  if (invite) await sendInviteEmail(invite);
   return getAthlete(actor, athleteId);
 }

@@ -1,6 +1,7 @@
 import "server-only";
 import { auth } from "@/auth";
 import { Unauthorized } from "@/lib/errors";
+import { hasSessionCookie } from "@/lib/session-cookies";
 import type { Actor } from "@/lib/server/actor";
 import { loadActor } from "./load-actor";
 import { actorFromApiToken } from "./token-actor";
@@ -12,7 +13,8 @@ export async function requestActor(request: Request): Promise<Actor | null> {
     const match = /^Bearer\s+(\S+)$/i.exec(header);
     return match?.[1] ? actorFromApiToken(match[1]) : null;
   }
-  return sessionActor();
+  // No session cookie, no session: skip Auth.js entirely (cheaper, and safe outside a request scope).
+  return hasSessionCookie(request.headers.get("cookie")) ? sessionActor() : null;
 }
 
 export async function requireRequestActor(request: Request): Promise<Actor> {

@@ -1,13 +1,12 @@
 import "server-only";
-import { addDays, format } from "date-fns";
+import { addDays } from "date-fns";
 import { eq } from "drizzle-orm";
-import { createElement } from "react";
 import type { Queryable } from "@/db/client";
 import { invites, teams } from "@/db/schema";
-import { InviteEmail } from "@/emails/invite-email";
 import type { Actor } from "@/lib/server/actor";
 import { hashToken, newSecretToken } from "@/lib/server/crypto/secret-token";
-import { appLink, sendMail } from "@/lib/server/mail/send-mail";
+import { enqueueMail } from "@/lib/server/jobs/enqueue-mail";
+import { appLink } from "@/lib/server/mail/send-mail";
 
 export const INVITE_DAYS = 7;
 
@@ -21,7 +20,10 @@ export interface CreatedInvite {
   inviterName: string;
 }
 
-/** A single-use invite; only the token's hash is stored, the link is returned to be e-mailed. */
+/**
+ * A single-use invite; only the token's hash is stored. The e-mail with the link is queued in the
+ * caller's transaction (pass the transaction as `q`), so a rolled-back request mails nothing.
+ */
 export async function createInvite(
   q: Queryable,
   actor: Actor,
@@ -42,7 +44,7 @@ export async function createInvite(
     })
     .returning({ id: invites.id });
   const [team] = await q.select({ name: teams.name }).from(teams).where(eq(teams.id, actor.teamId));
-  return {
+  const invite: CreatedInvite = {
     id: row!.id,
     email: input.email,
     role: input.role,
@@ -51,18 +53,16 @@ export async function createInvite(
     teamName: team?.name ?? "your team",
     inviterName: actor.name,
   };
-}
-
-export async function sendInviteEmail(invite: CreatedInvite): Promise<void> {
-  await sendMail({
+  await enqueueMail(q, {
+    kind: "invite",
+    teamId: actor.teamId,
+    inviteId: invite.id,
     to: invite.email,
-    subject: `${invite.inviterName} invited you to ${invite.teamName} on Rungwise`,
-    body: createElement(InviteEmail, {
-      teamName: invite.teamName,
-      inviterName: invite.inviterName,
-      role: invite.role,
-      link: invite.link,
-      expiresOn: format(invite.expiresAt, "d MMMM yyyy"),
-    }),
+    teamName: invite.teamName,
+    inviterName: invite.inviterName,
+    role: invite.role,
+    link: invite.link,
+    expiresAt: expiresAt.toISOString(),
   });
+  return invite;
 }

@@ -4,7 +4,7 @@ import { db } from "@/db/client";
 import { athletes } from "@/db/schema";
 import { Conflict, NotFound, invalidField } from "@/lib/errors";
 import type { Actor } from "@/lib/server/actor";
-import { createInvite, sendInviteEmail } from "./create-invite";
+import { createInvite } from "./create-invite";
 
 /** Sends (or re-sends) a sign-up link to an athlete record that has an e-mail and no account yet. */
 export async function inviteAthlete(actor: Actor, athleteId: string) {
@@ -18,6 +18,5 @@ export async function inviteAthlete(actor: Actor, athleteId: string) {
     if (!athlete.email) throw invalidField("email", "Add an e-mail address to this athlete first.");
     return createInvite(tx, actor, { email: athlete.email, role: "athlete", athleteId });
   });
-  await sendInviteEmail(invite);
   return { id: invite.id, email: invite.email, role: invite.role, expiresAt: invite.expiresAt.toISOString() };
 }

@@ -4,7 +4,7 @@ import { db } from "@/db/client";
 import { users } from "@/db/schema";
 import { Conflict } from "@/lib/errors";
 import type { Actor } from "@/lib/server/actor";
-import { createInvite, sendInviteEmail } from "./create-invite";
+import { createInvite } from "./create-invite";
 
 /** An owner invites another coach to the team. */
 export async function inviteCoach(actor: Actor, email: string) {
@@ -13,6 +13,5 @@ export async function inviteCoach(actor: Actor, email: string) {
     if (existing) throw new Conflict("Someone already has an account with that e-mail address.");
     return createInvite(tx, actor, { email, role: "coach" });
   });
-  await sendInviteEmail(invite);
   return { id: invite.id, email: invite.email, role: invite.role, expiresAt: invite.expiresAt.toISOString() };
 }

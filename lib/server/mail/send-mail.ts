@@ -1,5 +1,5 @@
 import "server-only";
-import { render } from "@react-email/render";
+import { render, toPlainText } from "@react-email/render";
 import type { ReactElement } from "react";
 import { env } from "@/lib/env";
 import { mailTransport } from "./transport";
@@ -11,9 +11,13 @@ export interface MailMessage {
   headers?: Record<string, string>;
 }
 
-/** Renders a React e-mail to HTML and plain text and sends it over SMTP. */
+/**
+ * Renders a React e-mail to HTML (once) and derives the plain-text part from that HTML, then sends
+ * both over SMTP.
+ */
 export async function sendMail(message: MailMessage): Promise<void> {
-  const [html, text] = await Promise.all([render(message.body), render(message.body, { plainText: true })]);
+  const html = await render(message.body);
+  const text = toPlainText(html);
   await mailTransport().sendMail({
     from: env().MAIL_FROM,
     to: message.to,

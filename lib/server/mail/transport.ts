@@ -9,6 +9,10 @@ export function mailTransport(): Transporter {
   if (transporter) return transporter;
   const config = env();
   transporter = nodemailer.createTransport({
+    // Reuse a few SMTP connections instead of a handshake per message (the digest sends thousands).
+    pool: true,
+    maxConnections: 5,
+    maxMessages: 500,
     host: config.SMTP_HOST,
     port: config.SMTP_PORT,
     secure: config.SMTP_SECURE,

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { AthleteProfile } from "@/components/athletes/athlete-profile";
+import { AthletePositions } from "@/components/ladders/athlete-positions";
 import { PageHeader } from "@/components/ui/card";
 import { getAthlete } from "@/lib/server/athletes/get-athlete";
 import { requirePageActor } from "@/lib/server/auth/page-actor";
@@ -20,6 +21,7 @@ export default async function AthletePage({ params }: { params: Promise<{ id: st
       </Link>
       <PageHeader title={athlete.name} lead={athlete.email ?? "No e-mail: you log for this athlete."} />
       <AthleteProfile athlete={athlete} staff={staff} />
+      <AthletePositions athleteId={athlete.id} />
     </>
   );
 }

@@ -1,0 +1,144 @@
+import "server-only";
+import { eq } from "drizzle-orm";
+import type { Tx } from "@/db/client";
+import { athletePositions } from "@/db/schema";
+import { NotFound } from "@/lib/errors";
+import type { Actor } from "@/lib/server/actor";
+import { enqueueNotice } from "@/lib/server/notifications/enqueue-notice";
+import type { VerdictDto } from "@/lib/validation/verdicts";
+import { judgePosition, type Judgement } from "./judge-position";
+import { loadPositionContext, type PositionContext } from "./load-position-context";
+import { movePosition } from "./move-position";
+import {
+  declinedWithoutNewEvidence,
+  pendingPromotionOf,
+  recordAutoPromotion,
+  recordPendingPromotion,
+  type PromotionDraft,
+} from "./record-promotion";
+import { storedVerdict, toVerdictDto } from "./verdict-dto";
+
+/** Who asks: a person of a team (reads are scoped to it) or the system (daily job, seed). */
+export type EvaluationActor = Actor | "system";
+
+export interface EvaluatePositionInput {
+  positionId: string;
+  asOf: Date;
+  actor: EvaluationActor;
+  /** The log that triggered the evaluation, kept on any promotion it causes. */
+  logId?: string | null;
+}
+
+type Outcome = { promotedTo: string | null; pendingPromotionId: string | null; achieved: boolean };
+
+/**
+ * The one code path from evidence to promotion. Locks the position row (FOR UPDATE) and re-reads
+ * everything under the lock, so concurrent or retried evaluations see each other's moves: an
+ * athlete is promoted exactly once. Then:
+ *   - met on an auto ladder → moved to the next live rung at once (since = the latest session's
+ *     date), or the skill is achieved on the last rung (a promotion row with no target rung);
+ *   - met on an approve ladder → one pending proposal (also for the last rung: approving it
+ *     achieves the skill);
+ *   - step_down → one pending "down" proposal to the live rung below (never applied by itself);
+ *   - blocked (only prerequisites fail) → waits, and the verdict says for what.
+ * Nothing new is proposed while a proposal is pending, after the skill is achieved, or when a coach
+ * declined the same move and no session has been logged since. The position's derived figures are
+ * written in the same transaction. Returns the verdict of the rung evaluated.
+ */
+export async function evaluatePosition(tx: Tx, input: EvaluatePositionInput): Promise<VerdictDto> {
+  const teamId = input.actor === "system" ? undefined : input.actor.teamId;
+  const ctx = await loadPositionContext(tx, { positionId: input.positionId, teamId, lock: true });
+  if (!ctx) throw new NotFound("position");
+  const judged = await judgePosition(tx, ctx, input.asOf);
+  const outcome = await act(tx, ctx, judged, input);
+
+  if (outcome.promotedTo) {
+    // The athlete is on a new rung: its figures start from the evidence there (usually none yet).
+    const moved = await loadPositionContext(tx, { positionId: ctx.position.id });
+    if (moved) await writeFigures(tx, moved, await judgePosition(tx, moved, input.asOf));
+  } else {
+    await writeFigures(tx, ctx, judged);
+  }
+  return toVerdictDto({ ladderId: ctx.ladder.id, rungId: ctx.rung.id }, judged.verdict, judged.explanation, outcome);
+}
+
+async function act(tx: Tx, ctx: PositionContext, judged: Judgement, input: EvaluatePositionInput): Promise<Outcome> {
+  const none: Outcome = { promotedTo: null, pendingPromotionId: null, achieved: ctx.position.achievedAt !== null };
+  if (ctx.position.achievedAt) return none;
+  const pending = await pendingPromotionOf(tx, ctx.position.id);
+  if (pending) return { ...none, pendingPromotionId: pending.id };
+
+  const { verdict } = judged;
+  const effectiveOn = verdict.lastSessionDate ?? judged.today;
+  const draft = (direction: "up" | "down", toRungId: string | null): PromotionDraft => ({
+    direction,
+    toRungId,
+    effectiveOn,
+    verdict: storedVerdict(verdict, judged.explanation),
+    logId: input.logId ?? null,
+  });
+
+  if (verdict.status === "met") {
+    if (await declinedWithoutNewEvidence(tx, ctx, "up", effectiveOn)) return none;
+    const toRungId = ctx.nextRung?.id ?? null;
+    if (ctx.ladder.promotionMode === "approve") return { ...none, pendingPromotionId: await propose(tx, ctx, draft("up", toRungId)) };
+    const promotionId = await recordAutoPromotion(tx, ctx, draft("up", toRungId), input.asOf);
+    await movePosition(tx, {
+      positionId: ctx.position.id,
+      teamId: ctx.position.teamId,
+      athleteId: ctx.position.athleteId,
+      ladderId: ctx.ladder.id,
+      fromRungId: ctx.rung.id,
+      toRungId,
+      effectiveOn,
+      cause: "auto",
+      actorUserId: null,
+      promotionId,
+      verdict: storedVerdict(verdict, judged.explanation),
+      at: input.asOf,
+    });
+    await enqueueNotice(tx, { kind: "promotion", promotionId });
+    return { promotedTo: toRungId, pendingPromotionId: null, achieved: toRungId === null };
+  }
+
+  if (verdict.status === "step_down" && ctx.previousRung) {
+    if (await declinedWithoutNewEvidence(tx, ctx, "down", effectiveOn)) return none;
+    return { ...none, pendingPromotionId: await propose(tx, ctx, draft("down", ctx.previousRung.id)) };
+  }
+  return none;
+}
+
+async function propose(tx: Tx, ctx: PositionContext, draft: PromotionDraft): Promise<string> {
+  const pending = await recordPendingPromotion(tx, ctx, draft);
+  if (pending.created) await enqueueNotice(tx, { kind: "approval_needed", promotionId: pending.id });
+  return pending.id;
+}
+
+/** The figures the coach's tables sort and filter on, from the latest verdict and proposal. */
+async function writeFigures(tx: Tx, ctx: PositionContext, judged: Judgement): Promise<void> {
+  const { verdict } = judged;
+  const achieved = ctx.position.achievedAt !== null || (await isAchieved(tx, ctx.position.id));
+  const pending = achieved ? null : await pendingPromotionOf(tx, ctx.position.id);
+  const status = achieved
+    ? ("achieved" as const)
+    : pending
+      ? pending.direction === "up"
+        ? ("pending_approval" as const)
+        : ("step_down" as const)
+      : verdict.status;
+  await tx
+    .update(athletePositions)
+    .set({
+      readiness: achieved ? 100 : verdict.readiness,
+      status,
+      lastSessionOn: verdict.lastSessionDate,
+      lastPainOn: judged.lastPainOn,
+      sessionsMet: verdict.sessionsMet,
+    })
+    .where(eq(athletePositions.id, ctx.position.id));
+}
+
+async function isAchieved(tx: Tx, positionId: string): Promise<boolean> {
+  const [row] = await tx.select({ achievedAt: athletePositions.achievedAt }).from(athletePositions).where(eq(athletePositions.id, positionId));
+  return Boolean(row?.achievedAt);
+}
