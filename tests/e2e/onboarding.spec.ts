@@ -42,7 +42,7 @@ test("a coach signs up, invites an athlete, and the athlete joins from a phone",
   await expect(athletePage).toHaveURL(/\/today$/);
   await expect(athletePage.getByRole("heading", { name: "Hi Milo" })).toBeVisible();
   await expect(athletePage.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Today" })).toBeVisible();
-  await expect(athletePage.getByText(/does not replace a qualified coach/)).toBeVisible();
+  await expect(athletePage.getByRole("contentinfo").getByText(/does not replace a qualified coach/)).toBeVisible();
 
   await athletePage.getByRole("button", { name: "Sign out" }).click();
   await expect(athletePage).toHaveURL(/\/sign-in/);
