@@ -6,7 +6,7 @@ import { NotFound } from "@/lib/errors";
 import type { Actor } from "@/lib/server/actor";
 import type { CreateCommentInput, FormCheckCommentDto } from "@/lib/validation/form-checks";
 import { visibleFormChecks } from "./form-check-scope";
-import { notifyComment } from "./notify-comment";
+import { enqueueMail } from "@/lib/server/jobs/enqueue-mail";
 
 /** A staff comment pinned to a moment of the video; the athlete is told through the e-mail queue. */
 export async function addComment(actor: Actor, formCheckId: string, input: CreateCommentInput): Promise<FormCheckCommentDto> {
@@ -20,7 +20,8 @@ export async function addComment(actor: Actor, formCheckId: string, input: Creat
       .insert(formCheckComments)
       .values({ teamId: actor.teamId, formCheckId: check.id, authorId: actor.userId, atSeconds: input.atSeconds, body: input.body })
       .returning({ id: formCheckComments.id, atSeconds: formCheckComments.atSeconds, body: formCheckComments.body, createdAt: formCheckComments.createdAt });
-    await notifyComment(tx, { kind: "form_check_comment", commentId: comment!.id });
+    // The athlete hears about it by e-mail, queued with the comment (nothing is sent on rollback).
+    await enqueueMail(tx, { kind: "form_check_comment", teamId: actor.teamId, commentId: comment!.id });
     return {
       id: comment!.id,
       atSeconds: comment!.atSeconds,
