@@ -21,6 +21,12 @@ interface LadderChoice extends Choice {
 }
 
 /** The coach's weekly readiness table: server-side filters, sort and cursor paging; approve from a cell. */
+/** What the cells need from the table to approve in place (passed as react-table meta). */
+interface ApproveMeta {
+  approvingId: string | null;
+  onApprove: (promotionId: string) => void;
+}
+
 export function ReadinessTable({ currentWeek, ladders, squads }: { currentWeek: string; ladders: LadderChoice[]; squads: Choice[] }) {
   const queryClient = useQueryClient();
   const [filters, setFilters] = useState<ReadinessFilters>({
@@ -92,14 +98,15 @@ export function ReadinessTable({ currentWeek, ladders, squads }: { currentWeek: 
           id: ladder.id,
           header: ladder.name,
           accessorFn: (row) => row.ladders.find((c) => c.ladderId === ladder.id) ?? null,
-          cell: ({ row }) => {
+          cell: ({ row, table }) => {
             const cell = row.original.ladders.find((c) => c.ladderId === ladder.id);
+            const meta = table.options.meta as ApproveMeta;
             return cell ? (
               <ReadinessCellView
                 cell={cell}
                 athleteName={row.original.athleteName}
-                approving={approve.isPending && approve.variables === cell.pendingPromotionId}
-                onApprove={(id) => approve.mutate(id)}
+                approving={meta.approvingId !== null && meta.approvingId === cell.pendingPromotionId}
+                onApprove={meta.onApprove}
               />
             ) : (
               <span className="text-xs text-muted">Not placed</span>
@@ -108,7 +115,9 @@ export function ReadinessTable({ currentWeek, ladders, squads }: { currentWeek: 
         }),
       ),
     ],
-    [shown, approve],
+    // Columns must keep their identity across renders (react-table renders cell functions as
+    // components): a new identity would remount every cell, and a click landing mid-remount is lost.
+    [shown],
   );
 
   // eslint-disable-next-line react-hooks/incompatible-library -- the component opts out of the compiler ("use no memo")
@@ -122,6 +131,10 @@ export function ReadinessTable({ currentWeek, ladders, squads }: { currentWeek: 
     state: { columnVisibility: visibility },
     onColumnVisibilityChange: setVisibility,
     getRowId: (row) => row.athleteId,
+    meta: {
+      approvingId: approve.isPending ? (approve.variables ?? null) : null,
+      onApprove: approve.mutate,
+    } satisfies ApproveMeta,
   });
   const rows = table.getRowModel().rows;
   const visibleColumns = table.getVisibleLeafColumns();

@@ -49,7 +49,7 @@ export function useGridKeys(rows: number, cols: number) {
     "data-row": r,
     "data-col": c,
     tabIndex: r === row && c === col ? 0 : -1,
-    onFocus: () => setActive([r, c]),
+    onFocus: () => setActive((prev) => (prev[0] === r && prev[1] === c ? prev : [r, c])),
   });
 
   return { onKeyDown, cellProps };
