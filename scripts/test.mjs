@@ -161,7 +161,7 @@ async function main() {
   delete base.DATABASE_URL;
 
   const appPort = await freePort();
-  const ports = { pg: await freePort(), smtp: await freePort(), mailUi: await freePort(), s3: await freePort() };
+  const ports = { pg: await freePort(), smtp: await freePort(), mailUi: await freePort(), s3: await freePort(), payments: await freePort() };
   const commonEnv = {
     AUTH_SECRET: "rungwise-test-secret-not-for-production-0123456789",
     AUTH_TRUST_HOST: "true",
@@ -173,8 +173,8 @@ async function main() {
   const needServices = async () => {
     if (!services) {
       services = (async () => {
-        header("Test services (PostgreSQL, mail catcher, object storage)");
-        return startServices({ root, dataDir: runDir, mode: "test", ports, userEnv: {}, state });
+        header("Test services (PostgreSQL, mail catcher, object storage, payments fake)");
+        return startServices({ root, dataDir: runDir, mode: "test", ports, userEnv: {}, state, appUrl: commonEnv.APP_URL });
       })().then(
         (env) => ({ env }),
         (error) => ({ error: error instanceof Error ? error.message : String(error) }),

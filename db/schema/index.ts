@@ -6,3 +6,4 @@ export * from "./training";
 export * from "./logs";
 export * from "./promotions";
 export * from "./notifications";
+export * from "./billing";
