@@ -22,10 +22,12 @@ export const COACH_NAV: readonly NavItem[] = [
   { href: "/coach/team", label: "Team", roles: ["owner", "coach"] },
   { href: "/settings", label: "Settings", roles: ["owner", "coach"] },
   { href: "/coach/admin/jobs", label: "Mail jobs", roles: ["owner"] },
+  { href: "/coach/billing", label: "Billing", roles: ["owner"] },
 ];
 
 export const ATHLETE_NAV: readonly NavItem[] = [
   { href: "/today", label: "Today", short: "Today", roles: ["athlete"] },
+  { href: "/billing", label: "Membership", short: "Membership", roles: ["athlete"] },
   { href: "/settings", label: "Settings", short: "Me", roles: ["athlete"] },
 ];
 
