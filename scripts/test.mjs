@@ -316,7 +316,9 @@ async function e2eStage({ needServices, state, base, commonEnv, appPort }) {
       E2E_BASE_URL: appEnv.APP_URL,
       PLAYWRIGHT_JSON_OUTPUT_NAME: reportFile,
     };
-    const result = await run("playwright", bin(root, "playwright"), ["test", "--reporter=list,json"], { cwd: root, env: pwEnv });
+    // E2E_FILTER="billing" runs only matching spec files (a local shortcut).
+    const filters = (process.env.E2E_FILTER ?? "").split(/\s+/).filter(Boolean);
+    const result = await run("playwright", bin(root, "playwright"), ["test", "--reporter=list,json", ...filters], { cwd: root, env: pwEnv });
     return playwrightCounts(readJson(reportFile), result.code);
   } finally {
     await stop(app, { timeoutMs: 10_000 });
