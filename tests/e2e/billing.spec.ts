@@ -54,7 +54,7 @@ test("the owner sells an offer; an invited athlete pays on the test checkout and
   await expect(athletePage.getByText("Test mode: development payments fake")).toBeVisible();
   await athletePage.getByRole("button", { name: "Pay" }).click();
   await expect(athletePage).toHaveURL(/\/billing\?checkout=cs_test_/);
-  await expect(athletePage.getByText("Active")).toBeVisible();
+  await expect(athletePage.getByText("Active", { exact: true })).toBeVisible();
   await expect(athletePage.getByText(/Next charge on/)).toBeVisible();
   await athletePage.getByRole("button", { name: "Cancel at period end" }).click();
   await expect(athletePage.getByText(/Ends on .*nothing more is charged/)).toBeVisible();
