@@ -104,3 +104,18 @@ describe("idempotent, order-independent handling", () => {
     expect(await membershipRow(athleteId)).toEqual(row);
   });
 });
+
+describe("events about unknown objects", () => {
+  it("a signed event for a subscription the provider does not know is recorded and ignored", async () => {
+    const payload = JSON.stringify({
+      id: `evt_test_unknown_${Date.now()}`,
+      object: "event",
+      type: "customer.subscription.updated",
+      created: Math.floor(Date.now() / 1000),
+      data: { object: { id: "sub_test_does_not_exist", object: "subscription" } },
+    });
+    const res = await deliver({ payload, header: sdk.webhooks.generateTestHeaderString({ payload, secret: TEST_WEBHOOK_SECRET }) });
+    expect(res.status).toBe(200);
+    expect(res.data.duplicate).toBe(false);
+  });
+});

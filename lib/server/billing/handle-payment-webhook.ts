@@ -1,6 +1,6 @@
 import "server-only";
 import { eq } from "drizzle-orm";
-import type Stripe from "stripe";
+import Stripe from "stripe";
 import { db } from "@/db/client";
 import { billingEvents, billingPayments, billingSubscriptions } from "@/db/schema";
 import { BadRequest } from "@/lib/errors";
@@ -34,6 +34,19 @@ async function subscriptionIdOf(stripe: Stripe, event: Stripe.Event): Promise<st
 }
 
 /**
+ * An object the provider no longer knows is nothing to apply (the event is recorded and ignored);
+ * any other failure propagates, the answer is 500 and the provider retries later.
+ */
+async function notFoundAsNull<T>(request: Promise<T>): Promise<T | null> {
+  try {
+    return await request;
+  } catch (error) {
+    if (error instanceof Stripe.errors.StripeInvalidRequestError && error.statusCode === 404) return null;
+    throw error;
+  }
+}
+
+/**
  * Verifies and handles one webhook delivery. Each event id is handled once (a replay answers
  * `duplicate: true` and changes nothing); the subscription is re-fetched from the provider, so
  * deliveries may arrive in any order. A bad signature is 400 before anything is read or written.
@@ -52,8 +65,8 @@ export async function handlePaymentWebhook(rawBody: string, signature: string | 
   const [seen] = await db.select({ id: billingEvents.eventId }).from(billingEvents).where(eq(billingEvents.eventId, event.id));
   if (seen) return { received: true, duplicate: true };
 
-  const subscriptionId = HANDLED.has(event.type) ? await subscriptionIdOf(stripe, event) : null;
-  const subscription = subscriptionId ? await stripe.subscriptions.retrieve(subscriptionId) : null;
+  const subscriptionId = HANDLED.has(event.type) ? await notFoundAsNull(subscriptionIdOf(stripe, event)) : null;
+  const subscription = subscriptionId ? await notFoundAsNull(stripe.subscriptions.retrieve(subscriptionId)) : null;
 
   return db.transaction(async (tx) => {
     const [fresh] = await tx.insert(billingEvents).values({ eventId: event.id, type: event.type }).onConflictDoNothing().returning({ id: billingEvents.eventId });
