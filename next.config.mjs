@@ -8,6 +8,8 @@ const nextConfig = {
   serverExternalPackages: ["pg", "pg-boss", "nodemailer", "bcryptjs"],
   // `npm test` type-checks the whole project as its own stage; the build need not do it twice.
   typescript: { ignoreBuildErrors: true },
+  // A git worktree whose node_modules links to another checkout needs a wider Turbopack root.
+  ...(process.env.NEXT_TURBOPACK_ROOT ? { turbopack: { root: process.env.NEXT_TURBOPACK_ROOT } } : {}),
 };
 
 export default nextConfig;

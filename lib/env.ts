@@ -44,3 +44,40 @@ export function env(): Env {
   cached ??= parseEnv(process.env);
   return cached;
 }
+
+/**
+ * S3-compatible storage and upload limits for form checks, validated on first use. Kept as its own
+ * schema so a missing bucket setting never blocks the rest of the app from starting; the defaults
+ * match the local fake that `npm start` runs.
+ */
+export const ZStorageEnv = z.object({
+  S3_ENDPOINT: z.url({ protocol: /^https?$/, error: "S3_ENDPOINT must be an http(s) URL" }).default("http://127.0.0.1:4569"),
+  S3_REGION: z.string().min(1).default("us-east-1"),
+  S3_BUCKET: z.string().min(3).max(63).default("rungwise"),
+  S3_ACCESS_KEY_ID: z.string().min(1).default("S3RVER"),
+  S3_SECRET_ACCESS_KEY: z.string().min(1).default("S3RVER"),
+  S3_FORCE_PATH_STYLE: z.stringbool().default(true),
+  /** Largest video and image a form check accepts, in bytes (200 MB and 15 MB). */
+  UPLOAD_MAX_VIDEO_BYTES: z.coerce.number().int().min(1).default(200 * 1024 * 1024),
+  UPLOAD_MAX_IMAGE_BYTES: z.coerce.number().int().min(1).default(15 * 1024 * 1024),
+  /** Storage each athlete may fill with form checks, in bytes (2 GB). */
+  UPLOAD_ATHLETE_QUOTA_BYTES: z.coerce.number().int().min(1).default(2 * 1024 * 1024 * 1024),
+});
+
+export type StorageEnv = z.infer<typeof ZStorageEnv>;
+
+export function parseStorageEnv(source: Record<string, string | undefined>): StorageEnv {
+  const result = ZStorageEnv.safeParse(source);
+  if (!result.success) {
+    const lines = result.error.issues.map((i) => `  - ${i.path.join(".") || "(env)"}: ${i.message}`);
+    throw new Error(`Invalid storage configuration:\n${lines.join("\n")}`);
+  }
+  return result.data;
+}
+
+let cachedStorage: StorageEnv | undefined;
+
+export function storageEnv(): StorageEnv {
+  cachedStorage ??= parseStorageEnv(process.env);
+  return cachedStorage;
+}

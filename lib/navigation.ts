@@ -13,7 +13,9 @@ export interface NavItem {
 }
 
 export const COACH_NAV: readonly NavItem[] = [
+  { href: "/coach/readiness", label: "This week", roles: ["owner", "coach"] },
   { href: "/coach/athletes", label: "Athletes", roles: ["owner", "coach"] },
+  { href: "/coach/form-checks", label: "Form checks", roles: ["owner", "coach"] },
   { href: "/coach/approvals", label: "Approvals", roles: ["owner", "coach"] },
   { href: "/coach/ladders", label: "Ladders", roles: ["owner", "coach"] },
   { href: "/coach/squads", label: "Squads", roles: ["owner", "coach"] },
@@ -27,7 +29,10 @@ export const COACH_NAV: readonly NavItem[] = [
 
 export const ATHLETE_NAV: readonly NavItem[] = [
   { href: "/today", label: "Today", short: "Today", roles: ["athlete"] },
-  { href: "/billing", label: "Membership", short: "Membership", roles: ["athlete"] },
+  { href: "/progress", label: "Progress", short: "Progress", roles: ["athlete"] },
+  { href: "/history", label: "History", short: "History", roles: ["athlete"] },
+  { href: "/form-checks", label: "Form checks", short: "Form", roles: ["athlete"] },
+  { href: "/billing", label: "Membership", short: "Member", roles: ["athlete"] },
   { href: "/settings", label: "Settings", short: "Me", roles: ["athlete"] },
 ];
 

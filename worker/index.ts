@@ -9,6 +9,8 @@ import { SCHEDULER_QUEUE } from "@/lib/server/jobs/mail-job";
 import { processMailBatch } from "@/lib/server/jobs/process-mail-batch";
 import { relayOutbox } from "@/lib/server/jobs/relay-outbox";
 import { runDailyEvaluations } from "@/lib/server/jobs/run-daily-evaluations";
+import { drainStorageDeletions } from "@/lib/server/storage/drain-storage-deletions";
+import { sweepAbandonedUploads } from "@/lib/server/uploads/sweep-abandoned-uploads";
 
 const IDLE_MS = 500;
 const CONCURRENCY = Number(process.env.WORKER_CONCURRENCY ?? 16);
@@ -26,6 +28,12 @@ async function tick() {
   const digests = await enqueueDueDigests(now);
   const days = await runDailyEvaluations(now);
   if (digests || days.length) log(`scheduler: ${digests} digests queued, ${days.length} teams re-evaluated`);
+  // Form-check files: give up unfinished uploads, then remove queued objects (failures retry with backoff).
+  const abandoned = await sweepAbandonedUploads(now);
+  const storage = await drainStorageDeletions({ now, limit: 500 });
+  if (abandoned || storage.removed || storage.failed) {
+    log(`storage: ${abandoned} abandoned uploads, ${storage.removed} objects removed, ${storage.failed} to retry`);
+  }
 }
 
 async function mailLoop() {

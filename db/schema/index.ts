@@ -6,4 +6,5 @@ export * from "./training";
 export * from "./logs";
 export * from "./promotions";
 export * from "./notifications";
+export * from "./form-checks";
 export * from "./billing";

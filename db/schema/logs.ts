@@ -68,5 +68,7 @@ export const logEntries = pgTable(
     index("log_entries_athlete_rung_date_idx").on(t.athleteId, t.rungId, t.performedOn),
     index("log_entries_team_date_idx").on(t.teamId, t.performedOn, t.athleteId, t.ladderId),
     index("log_entries_log_idx").on(t.logId),
+    // The weekly readiness table's per-position figures (sessions and pain in a week).
+    index("log_entries_athlete_ladder_date_idx").on(t.athleteId, t.ladderId, t.performedOn),
   ],
 );

@@ -12,6 +12,8 @@ async function signUpFreshTeam(page: Page) {
   await page.getByRole("button", { name: "Create my team" }).click();
   // Sign-up hashes a password and installs the starter library: allow a slow shared machine.
   await expect(page).toHaveURL(/\/coach/, { timeout: 30_000 });
+  await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Athletes" }).click();
+  await expect(page.getByRole("heading", { name: "Athletes" })).toBeVisible();
 }
 
 async function addRung(page: Page, name: string, numbers: { target?: string; sets?: string } = {}) {

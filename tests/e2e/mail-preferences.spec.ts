@@ -16,12 +16,12 @@ test("a coach gets the week's digest, unsubscribes from its link, and sees the c
   await page.goto("/settings");
   await expect(page.getByRole("heading", { name: "E-mail" })).toBeVisible();
   await page.getByLabel("Weekly mail on").selectOption({ label: "Friday" });
-  await page.getByLabel("At").selectOption({ label: "17:00" });
+  await page.getByLabel("At", { exact: true }).selectOption({ label: "17:00" });
   await page.getByRole("button", { name: "Save e-mail choices" }).click();
   await expect(page.getByText("Saved.")).toBeVisible();
   await page.reload();
   await expect(page.getByLabel("Weekly mail on")).toHaveValue("5");
-  await expect(page.getByLabel("At")).toHaveValue("17");
+  await expect(page.getByLabel("At", { exact: true })).toHaveValue("17");
 
   // Queue the week's digest now (the worker sends it), then follow its unsubscribe link.
   const run = await page.request.post("/api/v1/digests/run?week=2026-W48");

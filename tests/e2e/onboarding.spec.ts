@@ -14,6 +14,8 @@ test("a coach signs up, invites an athlete, and the athlete joins from a phone",
   await page.getByRole("button", { name: "Create my team" }).click();
 
   await expect(page).toHaveURL(/\/coach/);
+  // The coach's home is the weekly table; the roster is one click away.
+  await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Athletes" }).click();
   await expect(page.getByRole("heading", { name: "Athletes" })).toBeVisible();
   await expect(page.getByText("No athletes yet")).toBeVisible();
 
@@ -40,7 +42,7 @@ test("a coach signs up, invites an athlete, and the athlete joins from a phone",
   await expect(athletePage).toHaveURL(/\/today$/);
   await expect(athletePage.getByRole("heading", { name: "Hi Milo" })).toBeVisible();
   await expect(athletePage.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Today" })).toBeVisible();
-  await expect(athletePage.getByText(/does not replace a qualified coach/)).toBeVisible();
+  await expect(athletePage.getByRole("contentinfo").getByText(/does not replace a qualified coach/)).toBeVisible();
 
   await athletePage.getByRole("button", { name: "Sign out" }).click();
   await expect(athletePage).toHaveURL(/\/sign-in/);

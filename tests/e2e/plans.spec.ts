@@ -12,7 +12,9 @@ test("a coach builds a squad, a block, a plan, and gives the plan to the squad",
   await page.getByLabel("Time zone").fill("Europe/Lisbon");
   await page.getByRole("button", { name: "Create my team" }).click();
   // Sign-up hashes the password and installs the starter ladders: allow it longer on a busy machine.
-  await expect(page.getByRole("heading", { name: "Athletes" })).toBeVisible({ timeout: 45_000 });
+  await expect(page).toHaveURL(/\/coach/, { timeout: 45_000 });
+  await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Athletes" }).click();
+  await expect(page.getByRole("heading", { name: "Athletes" })).toBeVisible();
 
   // Two athletes trained in person (no e-mail).
   const addForm = page.getByRole("complementary");

@@ -30,7 +30,7 @@ describe("invites", () => {
     expect(mail?.subject).toContain("invited you");
     expect(mail?.html).toContain("<");
     const link = firstLink(mail!, "/invite/");
-    expect(link.startsWith("http://localhost:3000/invite/")).toBe(true); // absolute
+    expect(link.startsWith(new URL("/invite/", process.env.APP_URL).toString())).toBe(true); // absolute, on the configured origin
     const token = link.split("/invite/")[1]!;
 
     expect(await findInvite(token)).toMatchObject({ email, role: "athlete", athleteName: "Rosa Quill" });

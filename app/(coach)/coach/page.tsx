@@ -1,6 +1,6 @@
 import { redirect } from "next/navigation";
 
-// The coach's home; the weekly readiness review takes this spot once it exists.
+// The coach's home is the weekly readiness review.
 export default function CoachHome() {
-  redirect("/coach/athletes");
+  redirect("/coach/readiness");
 }

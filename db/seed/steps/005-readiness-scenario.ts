@@ -17,8 +17,8 @@ interface ScenarioSession {
 }
 
 /**
- * [athlete, ladder, rung, sessions]: the readiness stories the demo shows. Written only when the
- * athlete has no entries on that rung yet (an earlier step may already have logged history there).
+ * [athlete, ladder, rung, sessions]: the readiness stories the demo shows. They are the most recent
+ * sessions on the rung; a date that already has an entry there (from the history step) is left alone.
  */
 const SCENARIO: [DemoAthleteKey, string, string, ScenarioSession[]][] = [
   // Waits for the coach: two good sessions on an approve ladder → one pending proposal.
@@ -64,9 +64,10 @@ export const readinessScenario: SeedStep = {
       const ladderId = team.ladderIds[ladder];
       if (!athleteId || !ladderId) continue;
       const rungId = team.rungId(ladder, rung);
-      if (await hasEntries(tx, athleteId, rungId)) continue;
       for (const session of sessions) {
-        await writeSession(tx, { teamId: team.teamId, athleteId, ladderId, rungId, enteredById: team.ownerId }, addDays(today, -session.daysAgo), session);
+        const date = addDays(today, -session.daysAgo);
+        if (await hasEntryOn(tx, athleteId, rungId, date)) continue;
+        await writeSession(tx, { teamId: team.teamId, athleteId, ladderId, rungId, enteredById: team.ownerId }, date, session);
       }
     }
 
@@ -79,11 +80,11 @@ export const readinessScenario: SeedStep = {
   },
 };
 
-async function hasEntries(tx: Tx, athleteId: string, rungId: string): Promise<boolean> {
+async function hasEntryOn(tx: Tx, athleteId: string, rungId: string, date: string): Promise<boolean> {
   const [row] = await tx
     .select({ id: logEntries.id })
     .from(logEntries)
-    .where(and(eq(logEntries.athleteId, athleteId), eq(logEntries.rungId, rungId)))
+    .where(and(eq(logEntries.athleteId, athleteId), eq(logEntries.rungId, rungId), eq(logEntries.performedOn, date)))
     .limit(1);
   return row !== undefined;
 }

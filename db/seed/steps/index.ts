@@ -2,6 +2,7 @@ import type { SeedStep } from "../step";
 import { demoClub } from "./001-demo-club";
 import { starterLibrary } from "./002-starter-library";
 import { squadsAndPlans } from "./003-squads-and-plans";
+import { trainingHistory } from "./004-training-history";
 import { readinessScenario } from "./005-readiness-scenario";
 import { notificationPreferencesStep } from "./006-notification-preferences";
 
@@ -10,6 +11,7 @@ export const SEED_STEPS: readonly SeedStep[] = [
   demoClub,
   starterLibrary,
   squadsAndPlans,
+  trainingHistory,
   readinessScenario,
   notificationPreferencesStep,
 ];

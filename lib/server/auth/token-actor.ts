@@ -1,25 +1,46 @@
 import "server-only";
 import { and, eq, isNull } from "drizzle-orm";
 import { db } from "@/db/client";
-import { apiTokens } from "@/db/schema";
+import { apiTokens, athletes, teams, users } from "@/db/schema";
 import type { Actor } from "@/lib/server/actor";
 import { hashToken, tokenMatches } from "@/lib/server/crypto/secret-token";
-import { loadActor } from "./load-actor";
 
-/** The actor behind a Bearer token, or null when the token is unknown or revoked. */
+/** "Last used" is a hint for people, not an audit trail: stamping it once a minute keeps writes off hot paths. */
+const LAST_USED_RESOLUTION_MS = 60_000;
+
+/**
+ * The actor behind a Bearer token, or null when the token is unknown, revoked, or its user is
+ * disabled. One query: token, user, team and linked athlete together (read fresh per request, so
+ * a role change or a disabled account takes effect at once).
+ */
 export async function actorFromApiToken(token: string): Promise<Actor | null> {
   const [row] = await db
-    .select({ id: apiTokens.id, userId: apiTokens.userId, tokenHash: apiTokens.tokenHash })
+    .select({
+      tokenId: apiTokens.id,
+      tokenHash: apiTokens.tokenHash,
+      lastUsedAt: apiTokens.lastUsedAt,
+      userId: users.id,
+      teamId: users.teamId,
+      role: users.role,
+      name: users.name,
+      email: users.email,
+      timeZone: teams.timeZone,
+      athleteId: athletes.id,
+    })
     .from(apiTokens)
+    .innerJoin(users, and(eq(users.id, apiTokens.userId), isNull(users.disabledAt)))
+    .innerJoin(teams, eq(teams.id, users.teamId))
+    .leftJoin(athletes, and(eq(athletes.userId, users.id), eq(athletes.teamId, users.teamId)))
     .where(and(eq(apiTokens.tokenHash, hashToken(token)), isNull(apiTokens.revokedAt)));
   if (!row || !tokenMatches(token, row.tokenHash)) return null;
-  const actor = await loadActor(row.userId);
-  if (!actor) return null;
-  // Best effort, off the response path's critical section: a failed stamp must not fail the request.
-  void db
-    .update(apiTokens)
-    .set({ lastUsedAt: new Date() })
-    .where(eq(apiTokens.id, row.id))
-    .catch(() => undefined);
+  if (!row.lastUsedAt || Date.now() - row.lastUsedAt.getTime() > LAST_USED_RESOLUTION_MS) {
+    // Best effort, off the response path: a failed stamp must not fail the request.
+    void db
+      .update(apiTokens)
+      .set({ lastUsedAt: new Date() })
+      .where(eq(apiTokens.id, row.tokenId))
+      .catch(() => undefined);
+  }
+  const { tokenId: _tokenId, tokenHash: _tokenHash, lastUsedAt: _lastUsedAt, ...actor } = row;
   return actor;
 }

@@ -5,6 +5,7 @@ import { InviteEmail } from "@/emails/invite-email";
 import { PasswordResetEmail } from "@/emails/password-reset-email";
 import { sendApprovalNotice } from "@/lib/server/notifications/send-approval-notice";
 import { sendAthleteSummary, sendDigest } from "@/lib/server/notifications/send-digest";
+import { sendFormCheckCommentNotice } from "@/lib/server/notifications/send-form-check-comment-notice";
 import { sendPromotionNotice } from "@/lib/server/notifications/send-promotion-notice";
 import { deliverOnce } from "./deliver-once";
 import type { MailJob } from "./mail-job";
@@ -20,6 +21,8 @@ export async function handleMailJob(job: MailJob): Promise<number> {
       return sendDigest(job);
     case "athlete_summary":
       return sendAthleteSummary(job);
+    case "form_check_comment":
+      return sendFormCheckCommentNotice(job);
     case "invite": {
       // Security mail: sent whatever the preferences say.
       const sent = await deliverOnce({

@@ -4,6 +4,7 @@ export type MailJob =
   | { kind: "approval_needed"; teamId: string; promotionId: string }
   | { kind: "digest"; teamId: string; userId: string; week: string }
   | { kind: "athlete_summary"; teamId: string; athleteId: string; week: string }
+  | { kind: "form_check_comment"; teamId: string; commentId: string }
   | {
       kind: "invite";
       teamId: string;

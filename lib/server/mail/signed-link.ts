@@ -34,8 +34,10 @@ export function signLink(purpose: LinkPurpose, subject: string, ttlSeconds: numb
 export function verifyLink(token: string, purpose: LinkPurpose, now = new Date()): LinkClaims | null {
   const [body, sig, extra] = token.split(".");
   if (!body || !sig || extra !== undefined) return null;
-  const presented = Buffer.from(sig, "base64url");
-  const expected = signature(body);
+  // Compare the text, not decoded bytes: base64url's last character carries spare bits, so two
+  // different strings can decode to the same bytes and a tampered token would still verify.
+  const presented = Buffer.from(sig);
+  const expected = Buffer.from(signature(body).toString("base64url"));
   if (presented.length !== expected.length || !timingSafeEqual(presented, expected)) return null;
   let claims: LinkClaims;
   try {

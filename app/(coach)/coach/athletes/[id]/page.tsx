@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { AthleteProfile } from "@/components/athletes/athlete-profile";
 import { AthletePositions } from "@/components/ladders/athlete-positions";
+import { buttonClass } from "@/components/ui/button";
 import { PageHeader } from "@/components/ui/card";
 import { getAthlete } from "@/lib/server/athletes/get-athlete";
 import { requirePageActor } from "@/lib/server/auth/page-actor";
@@ -19,7 +20,20 @@ export default async function AthletePage({ params }: { params: Promise<{ id: st
       <Link href="/coach/athletes" className="text-sm font-semibold text-moss hover:underline">
         ← All athletes
       </Link>
-      <PageHeader title={athlete.name} lead={athlete.email ?? "No e-mail: you log for this athlete."} />
+      <PageHeader
+        title={athlete.name}
+        lead={athlete.email ?? "No e-mail: you log for this athlete."}
+        actions={
+          <>
+            <Link href={`/coach/athletes/${athlete.id}/today`} className={buttonClass("primary")}>
+              Today &amp; log sets
+            </Link>
+            <Link href={`/coach/athletes/${athlete.id}/progress`} className={buttonClass("secondary")}>
+              Progress and load
+            </Link>
+          </>
+        }
+      />
       <AthleteProfile athlete={athlete} staff={staff} />
       <AthletePositions athleteId={athlete.id} />
     </>

@@ -46,4 +46,5 @@ ALTER TABLE "notification_preferences" ADD CONSTRAINT "notification_preferences_
 CREATE UNIQUE INDEX "daily_evaluations_team_date_key" ON "daily_evaluations" USING btree ("team_id","local_date");--> statement-breakpoint
 CREATE UNIQUE INDEX "mail_deliveries_dedupe_key" ON "mail_deliveries" USING btree ("dedupe_key");--> statement-breakpoint
 CREATE INDEX "mail_deliveries_team_idx" ON "mail_deliveries" USING btree ("team_id","sent_at");--> statement-breakpoint
-CREATE INDEX "notification_preferences_team_idx" ON "notification_preferences" USING btree ("team_id");
+CREATE INDEX "notification_preferences_team_idx" ON "notification_preferences" USING btree ("team_id");--> statement-breakpoint
+CREATE INDEX "log_entries_athlete_ladder_date_idx" ON "log_entries" USING btree ("athlete_id","ladder_id","performed_on");

@@ -1,0 +1,46 @@
+import "server-only";
+import { and, desc, eq, gte, isNull, lt, lte, or } from "drizzle-orm";
+import { z } from "zod";
+import type { z as Z } from "zod";
+import { db } from "@/db/client";
+import { logs } from "@/db/schema";
+import type { Actor } from "@/lib/server/actor";
+import { getAthlete } from "@/lib/server/athletes/get-athlete";
+import { decodeCursor, pageOf } from "@/lib/server/http/cursor";
+import type { LogDto, ZLogsQuery } from "@/lib/validation/logs";
+import { entriesOf, toLogDto } from "./log-dto";
+
+const zLogCursor = z.object({ d: z.string(), id: z.string() });
+
+/** GET /api/v1/athletes/{id}/logs: newest first, with entries, a page at a time. */
+export async function listAthleteLogs(actor: Actor, athleteId: string, query: Z.output<typeof ZLogsQuery>) {
+  await getAthlete(actor, athleteId); // 404 for another team's or another athlete's record
+  const after = decodeCursor(zLogCursor, query.cursor);
+  const rows = await db
+    .select({
+      id: logs.id,
+      athleteId: logs.athleteId,
+      performedOn: logs.performedOn,
+      durationMinutes: logs.durationMinutes,
+      sessionRpe: logs.sessionRpe,
+      enteredById: logs.enteredById,
+      createdAt: logs.createdAt,
+    })
+    .from(logs)
+    .where(
+      and(
+        eq(logs.teamId, actor.teamId),
+        eq(logs.athleteId, athleteId),
+        isNull(logs.deletedAt),
+        query.from ? gte(logs.performedOn, query.from) : undefined,
+        query.to ? lte(logs.performedOn, query.to) : undefined,
+        after ? or(lt(logs.performedOn, after.d), and(eq(logs.performedOn, after.d), lt(logs.id, after.id))) : undefined,
+      ),
+    )
+    .orderBy(desc(logs.performedOn), desc(logs.id))
+    .limit(query.limit + 1);
+  const page = pageOf(rows, query.limit, (row) => ({ d: row.performedOn, id: row.id }));
+  const entries = await entriesOf(db, page.items.map((l) => l.id));
+  const items: LogDto[] = page.items.map((log) => toLogDto(log, entries.get(log.id) ?? []));
+  return { items, nextCursor: page.nextCursor };
+}

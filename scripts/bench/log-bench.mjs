@@ -1,0 +1,231 @@
+// Log benchmark: the raw INSERT floor, POST /api/v1/logs saturated, and at a fixed rate; then a
+// replay of used keys to prove retries never add rows.
+import crypto from "node:crypto";
+import autocannon from "autocannon";
+import pg from "pg";
+import { percentiles, round } from "./stats.mjs";
+
+const ATHLETES = 50;
+const FLOOR_DATE = "2000-01-01"; // floor rows are told apart by date and removed afterwards
+
+/** A team (through the API, so it gets the starter library), 50 athletes on one rung, a token. */
+async function seed(baseUrl, dbUrl) {
+  const email = `bench-${crypto.randomUUID().slice(0, 8)}@bench.test`;
+  const signup = await fetch(`${baseUrl}/api/v1/signup`, {
+    method: "POST",
+    headers: { "content-type": "application/json" },
+    body: JSON.stringify({ email, password: "bench-password-123", name: "Bench Owner", teamName: "Bench Club", timeZone: "Europe/Amsterdam" }),
+  });
+  if (signup.status !== 201) throw new Error(`sign-up failed: ${signup.status} ${await signup.text()}`);
+  const client = new pg.Client({ connectionString: dbUrl });
+  await client.connect();
+  try {
+    const { rows: [owner] } = await client.query("select id, team_id from users where email = $1", [email]);
+    const token = `rw_${crypto.randomBytes(32).toString("base64url")}`;
+    await client.query("insert into api_tokens (team_id, user_id, name, token_hash, prefix) values ($1, $2, 'bench', $3, $4)", [
+      owner.team_id, owner.id, crypto.createHash("sha256").update(token).digest("hex"), token.slice(0, 10),
+    ]);
+    const { rows: [rung] } = await client.query(
+      `select r.id, r.ladder_id from rungs r join ladders l on l.id = r.ladder_id
+        where r.team_id = $1 and l.starter_key = 'freestanding-handstand' and r.starter_key = 'chest-to-wall-hold'`,
+      [owner.team_id],
+    );
+    const athleteIds = [];
+    for (let i = 0; i < ATHLETES; i += 1) {
+      const { rows: [a] } = await client.query("insert into athletes (team_id, name) values ($1, $2) returning id", [owner.team_id, `Bench Athlete ${i + 1}`]);
+      await client.query(
+        "insert into athlete_positions (team_id, athlete_id, ladder_id, rung_id, since) values ($1, $2, $3, $4, '2020-01-01')",
+        [owner.team_id, a.id, rung.ladder_id, rung.id],
+      );
+      athleteIds.push(a.id);
+    }
+    return { teamId: owner.team_id, ownerId: owner.id, token, rungId: rung.id, athleteIds };
+  } finally {
+    await client.end();
+  }
+}
+
+/** (1) The floor: single-row INSERTs into logs through pg, 50 clients, for `seconds`. */
+async function floor(dbUrl, world, seconds) {
+  const clients = await Promise.all(Array.from({ length: 50 }, async () => {
+    const c = new pg.Client({ connectionString: dbUrl });
+    await c.connect();
+    return c;
+  }));
+  const latencies = [];
+  let errors = 0;
+  const end = Date.now() + seconds * 1000;
+  await Promise.all(clients.map(async (c, i) => {
+    const athleteId = world.athleteIds[i % world.athleteIds.length];
+    while (Date.now() < end) {
+      const t = performance.now();
+      try {
+        await c.query("insert into logs (team_id, athlete_id, performed_on, entered_by_id) values ($1, $2, $3, $4)", [world.teamId, athleteId, FLOOR_DATE, world.ownerId]);
+        latencies.push(performance.now() - t);
+      } catch {
+        errors += 1;
+      }
+    }
+  }));
+  await clients[0].query("delete from logs where team_id = $1 and performed_on = $2", [world.teamId, FLOOR_DATE]);
+  await Promise.all(clients.map((c) => c.end()));
+  return { requests: latencies.length, rps: latencies.length / seconds, ...percentiles(latencies), errors };
+}
+
+function logBody(world, i, date) {
+  return JSON.stringify({
+    athleteId: world.athleteIds[i % world.athleteIds.length],
+    performedOn: date,
+    entries: [{ rungId: world.rungId, sets: [{ value: 20 + (i % 15), rpe: 7 }, { value: 18 + (i % 10), rpe: 7.5 }], pain: false }],
+  });
+}
+
+/** (2)/(3) POST /api/v1/logs through autocannon, every request with a fresh key; a sample kept for replays. */
+function hammer(baseUrl, world, options, sample) {
+  return new Promise((resolve, reject) => {
+    let n = 0;
+    const latencies = [];
+    const statuses = {};
+    const instance = autocannon(
+      {
+        url: `${baseUrl}/api/v1/logs`,
+        method: "POST",
+        headers: { "content-type": "application/json", authorization: `Bearer ${world.token}` },
+        duration: options.seconds,
+        connections: options.connections,
+        overallRate: options.rate,
+        requests: [
+          {
+            setupRequest: (request) => {
+              n += 1;
+              const key = `bench-${crypto.randomUUID()}`;
+              const body = logBody(world, n, options.date);
+              if (sample.length < 2000 && n % 3 === 0) sample.push({ key, body });
+              return { ...request, body, headers: { ...request.headers, "idempotency-key": key } };
+            },
+          },
+        ],
+      },
+      (error, result) => {
+        if (error) return reject(error);
+        const seconds = options.seconds;
+        resolve({
+          requests: latencies.length,
+          rps: latencies.length / seconds,
+          ...percentiles(latencies),
+          errors: result.errors + result.timeouts + (result.non2xx ?? 0),
+          statuses,
+        });
+      },
+    );
+    instance.on("response", (_client, statusCode, _bytes, responseTime) => {
+      latencies.push(responseTime);
+      statuses[statusCode] = (statuses[statusCode] ?? 0) + 1;
+    });
+  });
+}
+
+/** Replays sampled keys three times each, concurrently: every answer must be the first log, no new rows. */
+async function replays(baseUrl, dbUrl, world, candidates) {
+  // Only keys whose first request completed (a run's last requests are cut off when it ends).
+  const check = new pg.Client({ connectionString: dbUrl });
+  await check.connect();
+  const { rows: done } = await check.query("select key from idempotency_keys where owner_id = $1 and state = 'done' and key = any($2)", [
+    world.ownerId,
+    candidates.map((c) => c.key),
+  ]);
+  await check.end();
+  const doneKeys = new Set(done.map((r) => r.key));
+  const sample = candidates.filter((c) => doneKeys.has(c.key)).slice(0, 100);
+  const count = async () => {
+    const c = new pg.Client({ connectionString: dbUrl });
+    await c.connect();
+    const { rows: [r] } = await c.query(
+      `select (select count(*) from logs where team_id = $1)::int as logs,
+              (select count(*) from idempotency_keys where owner_id = $2 and state = 'done')::int as keys,
+              (select count(*) from log_entries where team_id = $1)::int as entries`,
+      [world.teamId, world.ownerId],
+    );
+    await c.end();
+    return r;
+  };
+  const before = await count();
+  let mismatches = 0;
+  const results = await Promise.all(
+    sample.flatMap(({ key, body }) =>
+      [0, 1, 2].map(() =>
+        fetch(`${baseUrl}/api/v1/logs`, {
+          method: "POST",
+          headers: { "content-type": "application/json", authorization: `Bearer ${world.token}`, "idempotency-key": key },
+          body,
+        }).then(async (res) => ({ key, status: res.status, id: (await res.json()).id })),
+      ),
+    ),
+  );
+  const idsByKey = new Map();
+  for (const r of results) {
+    if (r.status !== 201) mismatches += 1;
+    const seen = idsByKey.get(r.key);
+    if (seen && seen !== r.id) mismatches += 1;
+    idsByKey.set(r.key, r.id);
+  }
+  const after = await count();
+  return {
+    keys: sample.length,
+    replayed: results.length,
+    mismatches,
+    rowsAdded: after.logs - before.logs,
+    logsEqualKeys: after.logs === after.keys,
+    entriesPerLog: after.entries / Math.max(1, after.logs),
+  };
+}
+
+/** One request at a time: the latency of the request path itself, without queueing. */
+async function sequential(baseUrl, world, date, count = 30) {
+  const latencies = [];
+  for (let i = 0; i < count; i += 1) {
+    const t = performance.now();
+    const res = await fetch(`${baseUrl}/api/v1/logs`, {
+      method: "POST",
+      headers: { "content-type": "application/json", authorization: `Bearer ${world.token}`, "idempotency-key": `seq-${crypto.randomUUID()}` },
+      body: logBody(world, i, date),
+    });
+    await res.text();
+    latencies.push(performance.now() - t);
+  }
+  return percentiles(latencies);
+}
+
+export async function logBench({ baseUrl, dbUrl, seconds }) {
+  const world = await seed(baseUrl, dbUrl);
+  const date = new Date(Date.now() - 86_400_000).toISOString().slice(0, 10);
+  const single = await sequential(baseUrl, world, date);
+  const health = [];
+  for (let i = 0; i < 20; i += 1) {
+    const t = performance.now();
+    await (await fetch(`${baseUrl}/api/health`)).text();
+    health.push(performance.now() - t);
+  }
+  console.log(`[bench] GET /api/health one at a time: p50 ${round(percentiles(health).p50)} ms`);
+  console.log(`[bench] one request at a time: p50 ${round(single.p50)} ms, p95 ${round(single.p95)} ms`);
+  const sample = [];
+  // Warm the route (first compile of lazy chunks, pools) so it does not count against the runs.
+  await hammer(baseUrl, world, { seconds: 3, connections: 10, date }, []);
+  const floorResult = await floor(dbUrl, world, seconds);
+  const saturated = await hammer(baseUrl, world, { seconds, connections: 50, date }, sample);
+  const fixed = await hammer(baseUrl, world, { seconds, connections: 10, rate: 200, date }, sample);
+  const replay = await replays(baseUrl, dbUrl, world, sample);
+  const ratio = saturated.rps / floorResult.rps;
+  const goals = {
+    fixedRateP95Under25ms: fixed.p95 !== null && fixed.p95 < 25 && fixed.errors === 0,
+    ratioAtLeast0_08: ratio >= 0.08,
+    noDuplicates: replay.rowsAdded === 0 && replay.mismatches === 0 && replay.logsEqualKeys,
+  };
+  const row = (name, r) => ({ bench: name, requests: r.requests, "req/s": round(r.rps, 1), "p50 ms": round(r.p50), "p95 ms": round(r.p95), "p99 ms": round(r.p99), errors: r.errors });
+  return {
+    name: "log",
+    table: [row("(1) raw INSERT floor, 50 pg clients", floorResult), row("(2) POST /api/v1/logs, 50 conns", saturated), row("(3) POST /api/v1/logs, 200 req/s, 10 conns", fixed)],
+    summary: { ratio: round(ratio, 4), sequential: { p50: round(single.p50), p95: round(single.p95) }, replay, goals },
+    raw: { floor: floorResult, saturated, fixed },
+  };
+}

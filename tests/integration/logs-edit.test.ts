@@ -1,0 +1,113 @@
+import { and, eq } from "drizzle-orm";
+import { describe, expect, it, vi } from "vitest";
+import { DELETE as deleteLog, PATCH as patchLog } from "@/app/api/v1/logs/[id]/route";
+import { db } from "@/db/client";
+import { auditEvents, logEntries, logs } from "@/db/schema";
+import { addDays } from "@/lib/engine/calendar-date";
+import { localDateOf } from "@/lib/engine/local-date";
+import { loadRungSessions } from "@/lib/server/promotions/load-rung-sessions";
+import { bearerFor, createMember, createTeam } from "../support/factories";
+import { call } from "../support/http";
+import { placeOn, postLogAs, starterRung } from "../support/logging-factories";
+
+const evaluated = vi.hoisted(() => [] as { logId: string; rungs: { rungId: string }[] }[]);
+vi.mock("@/lib/server/promotions/evaluate-after-log", () => ({
+  evaluateAfterLog: async (_tx: unknown, _actor: unknown, input: { logId: string; rungs: { rungId: string }[] }) => {
+    evaluated.push(input);
+    return [];
+  },
+}));
+
+const ZONE = "Europe/Amsterdam";
+
+async function setup() {
+  const { teamId } = await createTeam({ timeZone: ZONE });
+  const me = await createMember(teamId, "athlete", "Editor");
+  const token = await bearerFor(me.actor);
+  const rung = await placeOn(teamId, me.actor.athleteId!, "freestanding-handstand", "chest-to-wall-hold");
+  return { teamId, me, token, rung, today: localDateOf(new Date(), ZONE) };
+}
+
+async function logOn(token: string, rungId: string, performedOn: string) {
+  const res = await postLogAs(token, { performedOn, entries: [{ rungId, sets: [{ value: 20, rpe: 8 }], pain: false }] });
+  expect(res.status).toBe(201);
+  return res.data as unknown as { id: string; entries: { id: string }[] };
+}
+
+describe("editing and deleting logs", () => {
+  it("passes only current-rung entries to the evaluation", async () => {
+    const { teamId, token, rung, today } = await setup();
+    const easier = await starterRung(teamId, "freestanding-handstand", "wall-walk-up");
+    const res = await postLogAs(token, {
+      performedOn: today,
+      entries: [
+        { rungId: easier.rungId, sets: [{ value: 3 }], pain: false },
+        { rungId: rung.rungId, sets: [{ value: 40 }], pain: false },
+        { rungId: rung.rungId, sets: [{ value: 41 }], pain: false },
+      ],
+    });
+    const call_ = evaluated.find((e) => e.logId === res.data.id);
+    expect(call_?.rungs).toEqual([{ ladderId: rung.ladderId, rungId: rung.rungId }]);
+  });
+
+  it("changes sets, pain, note and session figures within 7 days, audited with before and after", async () => {
+    const { token, rung, today } = await setup();
+    const log = await logOn(token, rung.rungId, addDays(today, -7));
+    const res = await call(patchLog, {
+      method: "PATCH",
+      token,
+      params: { id: log.id },
+      json: { durationMinutes: 50, sessionRpe: 6, entries: [{ id: log.entries[0]!.id, sets: [{ value: 31, rpe: 7 }, { value: 29 }], pain: true, note: "left wrist" }] },
+    });
+    expect(res.status).toBe(200);
+    expect(res.data).toMatchObject({ durationMinutes: 50, sessionRpe: 6, entries: [{ bestValue: 31, pain: true, note: "left wrist" }] });
+    expect(evaluated.some((e) => e.logId === log.id && e.rungs[0]?.rungId === rung.rungId)).toBe(true);
+    const [audit] = await db.select().from(auditEvents).where(and(eq(auditEvents.subjectId, log.id), eq(auditEvents.action, "log.updated")));
+    const data = audit!.data as { before: { durationMinutes: unknown; entries: { sets: unknown }[] }; after: { durationMinutes: unknown } };
+    expect(data.before.durationMinutes).toBeNull();
+    expect(data.before.entries[0]!.sets).toEqual([{ value: 20, rpe: 8 }]);
+    expect(data.after.durationMinutes).toBe(50);
+  });
+
+  it("refuses changes and deletion after 7 days with 409", async () => {
+    const { token, rung, today } = await setup();
+    const log = await logOn(token, rung.rungId, addDays(today, -8));
+    const patch = await call(patchLog, { method: "PATCH", token, params: { id: log.id }, json: { sessionRpe: 5 } });
+    expect(patch.status).toBe(409);
+    expect((await call(deleteLog, { method: "DELETE", token, params: { id: log.id } })).status).toBe(409);
+    const [row] = await db.select({ sessionRpe: logs.sessionRpe, deletedAt: logs.deletedAt }).from(logs).where(eq(logs.id, log.id));
+    expect(row).toEqual({ sessionRpe: null, deletedAt: null });
+  });
+
+  it("soft-deletes a log: gone from sessions, kept as a row, audited; a second delete is 404", async () => {
+    const { me, token, rung, today } = await setup();
+    const log = await logOn(token, rung.rungId, today);
+    const res = await call(deleteLog, { method: "DELETE", token, params: { id: log.id } });
+    expect(res.status).toBe(204);
+    expect(await loadRungSessions(db, { athleteId: me.actor.athleteId!, rungId: rung.rungId, since: addDays(today, -30) })).toEqual([]);
+    const entries = await db.select({ deletedAt: logEntries.deletedAt }).from(logEntries).where(eq(logEntries.logId, log.id));
+    expect(entries[0]!.deletedAt).not.toBeNull();
+    const audits = await db.select().from(auditEvents).where(and(eq(auditEvents.subjectId, log.id), eq(auditEvents.action, "log.deleted")));
+    expect(audits).toHaveLength(1);
+    expect((await call(deleteLog, { method: "DELETE", token, params: { id: log.id } })).status).toBe(404);
+  });
+
+  it("keeps other people's logs out of reach (404) and names unknown entries (422)", async () => {
+    const { teamId, token, rung, today } = await setup();
+    const log = await logOn(token, rung.rungId, today);
+    const other = await createMember(teamId, "athlete", "Nosy");
+    const otherToken = await bearerFor(other.actor);
+    expect((await call(patchLog, { method: "PATCH", token: otherToken, params: { id: log.id }, json: { sessionRpe: 5 } })).status).toBe(404);
+    expect((await call(deleteLog, { method: "DELETE", token: otherToken, params: { id: log.id } })).status).toBe(404);
+    const foreign = await createTeam({ timeZone: ZONE });
+    expect((await call(patchLog, { method: "PATCH", token: await bearerFor(foreign.owner), params: { id: log.id }, json: { sessionRpe: 5 } })).status).toBe(404);
+    const bad = await call(patchLog, {
+      method: "PATCH",
+      token,
+      params: { id: log.id },
+      json: { entries: [{ id: "00000000-0000-4000-8000-000000000000", pain: true }] },
+    });
+    expect(bad.status).toBe(422);
+    expect(bad.data.error?.issues?.[0]?.path).toBe("entries.0.id");
+  });
+});
