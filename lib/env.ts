@@ -17,6 +17,13 @@ export const ZEnv = z.object({
   SMTP_PASSWORD: z.string().optional(),
   SMTP_SECURE: z.stringbool().default(false),
   MAIL_FROM: z.string().min(3).default("Rungwise <no-reply@rungwise.test>"),
+  // Payments: billing is off while STRIPE_SECRET_KEY is unset. PAYMENTS_API_* point the SDK at the
+  // local development fake; leave them unset for the provider's real API.
+  STRIPE_SECRET_KEY: z.string().min(8).optional(),
+  STRIPE_WEBHOOK_SECRET: z.string().min(8).optional(),
+  PAYMENTS_API_HOST: z.string().min(1).optional(),
+  PAYMENTS_API_PORT: z.coerce.number().int().min(1).max(65535).optional(),
+  PAYMENTS_API_PROTOCOL: z.enum(["http", "https"]).optional(),
 });
 
 export type Env = z.infer<typeof ZEnv>;

@@ -24,6 +24,7 @@ export const COACH_NAV: readonly NavItem[] = [
   { href: "/coach/team", label: "Team", roles: ["owner", "coach"] },
   { href: "/settings", label: "Settings", roles: ["owner", "coach"] },
   { href: "/coach/admin/jobs", label: "Mail jobs", roles: ["owner"] },
+  { href: "/coach/billing", label: "Billing", roles: ["owner"] },
 ];
 
 export const ATHLETE_NAV: readonly NavItem[] = [
@@ -31,6 +32,7 @@ export const ATHLETE_NAV: readonly NavItem[] = [
   { href: "/progress", label: "Progress", short: "Progress", roles: ["athlete"] },
   { href: "/history", label: "History", short: "History", roles: ["athlete"] },
   { href: "/form-checks", label: "Form checks", short: "Form", roles: ["athlete"] },
+  { href: "/billing", label: "Membership", short: "Member", roles: ["athlete"] },
   { href: "/settings", label: "Settings", short: "Me", roles: ["athlete"] },
 ];
 

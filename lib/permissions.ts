@@ -43,6 +43,7 @@ export const PERMISSIONS = {
   "formChecks.comment": STAFF,
   "billing.manage": ["owner"],
   "billing.read": EVERYONE,
+  "billing.subscribe": ["athlete"],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof PERMISSIONS;

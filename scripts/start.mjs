@@ -76,11 +76,12 @@ async function main() {
     smtp: numberFrom("SMTP_PORT", 1025),
     mailUi: numberFrom("MAIL_UI_PORT", 1080),
     s3: numberFrom("S3_PORT", 4569),
+    payments: numberFrom("PAYMENTS_API_PORT", 12111),
   };
   if (!(await isPortFree(port))) throw new Error(`Port ${port} is already in use; set PORT to another port.`);
 
   header("Services");
-  const serviceEnv = await startServices({ root, dataDir, mode: "start", ports, userEnv, state: {} });
+  const serviceEnv = await startServices({ root, dataDir, mode: "start", ports, userEnv, state: {}, appUrl: userEnv.APP_URL || `http://localhost:${port}` });
   const appEnv = withUserPrecedence({
     ...serviceEnv,
     PORT: String(port),

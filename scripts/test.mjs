@@ -161,7 +161,7 @@ async function main() {
   delete base.DATABASE_URL;
 
   const appPort = await freePort();
-  const ports = { pg: await freePort(), smtp: await freePort(), mailUi: await freePort(), s3: await freePort() };
+  const ports = { pg: await freePort(), smtp: await freePort(), mailUi: await freePort(), s3: await freePort(), payments: await freePort() };
   const commonEnv = {
     AUTH_SECRET: "rungwise-test-secret-not-for-production-0123456789",
     AUTH_TRUST_HOST: "true",
@@ -173,8 +173,8 @@ async function main() {
   const needServices = async () => {
     if (!services) {
       services = (async () => {
-        header("Test services (PostgreSQL, mail catcher, object storage)");
-        return startServices({ root, dataDir: runDir, mode: "test", ports, userEnv: {}, state });
+        header("Test services (PostgreSQL, mail catcher, object storage, payments fake)");
+        return startServices({ root, dataDir: runDir, mode: "test", ports, userEnv: {}, state, appUrl: commonEnv.APP_URL });
       })().then(
         (env) => ({ env }),
         (error) => ({ error: error instanceof Error ? error.message : String(error) }),
@@ -227,6 +227,8 @@ async function main() {
       const reportFile = path.join(runDir, "vitest.json");
       const env = { ...base, ...serviceEnv, ...commonEnv };
       const args = ["run", "--reporter=default", "--reporter=json", `--outputFile.json=${reportFile}`, "--passWithNoTests"];
+      // VITEST_FILTER="billing-" narrows the run to matching test files (a local shortcut).
+      if (process.env.VITEST_FILTER) args.push(...process.env.VITEST_FILTER.split(/\s+/).filter(Boolean));
       const result = await run("vitest", bin(root, "vitest"), args, { cwd: root, env });
       record("unit", vitestCounts(readJson(reportFile), result.code));
     }
@@ -314,7 +316,9 @@ async function e2eStage({ needServices, state, base, commonEnv, appPort }) {
       E2E_BASE_URL: appEnv.APP_URL,
       PLAYWRIGHT_JSON_OUTPUT_NAME: reportFile,
     };
-    const result = await run("playwright", bin(root, "playwright"), ["test", "--reporter=list,json"], { cwd: root, env: pwEnv });
+    // E2E_FILTER="billing" runs only matching spec files (a local shortcut).
+    const filters = (process.env.E2E_FILTER ?? "").split(/\s+/).filter(Boolean);
+    const result = await run("playwright", bin(root, "playwright"), ["test", "--reporter=list,json", ...filters], { cwd: root, env: pwEnv });
     return playwrightCounts(readJson(reportFile), result.code);
   } finally {
     await stop(app, { timeoutMs: 10_000 });

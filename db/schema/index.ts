@@ -7,3 +7,4 @@ export * from "./logs";
 export * from "./promotions";
 export * from "./notifications";
 export * from "./form-checks";
+export * from "./billing";

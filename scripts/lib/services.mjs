@@ -2,7 +2,7 @@
 // the environment variables the app (and tests) need to reach it. To add one (e.g. a payment fake):
 // write a start function below and append it to `services`; both scripts pick it up.
 //
-// ctx: { root, dataDir, mode: "start" | "test", ports, userEnv, state }
+// ctx: { root, dataDir, mode: "start" | "test", ports, userEnv, state, appUrl }
 //   ports     numbers chosen by the caller (fixed defaults for start, free ones for test)
 //   userEnv   what the user exported; a service it already describes is not started
 //   state     shared handles (state.cluster for the test script's extra databases)
@@ -117,10 +117,42 @@ async function startObjectStore(ctx) {
   return env;
 }
 
+/**
+ * DEVELOPMENT FAKE of the payment provider (scripts/dev-fakes/payments-fake.mjs): the app's `stripe`
+ * SDK talks to it through PAYMENTS_API_HOST/PORT/PROTOCOL, and it posts signed webhooks to the app.
+ * Skipped for `start` when the user set a real STRIPE_SECRET_KEY.
+ */
+async function startPaymentsFake(ctx) {
+  const { userEnv } = ctx;
+  if (ctx.mode === "start" && userEnv.STRIPE_SECRET_KEY && !userEnv.PAYMENTS_API_HOST) {
+    info("Using the payment provider's real API (STRIPE_SECRET_KEY is set; no local fake).");
+    return {};
+  }
+  const env = {
+    PAYMENTS_API_HOST: "127.0.0.1",
+    PAYMENTS_API_PORT: String(ctx.ports.payments),
+    PAYMENTS_API_PROTOCOL: "http",
+    STRIPE_SECRET_KEY: "sk_test_rungwise_fake_0000000000000000",
+    STRIPE_WEBHOOK_SECRET: "whsec_rungwise_fake_0000000000000000",
+    PAYMENTS_WEBHOOK_URL: `${ctx.appUrl}/api/webhooks/payments`,
+  };
+  await requireFreePort(ctx.ports.payments, "PAYMENTS_API_PORT");
+  const handle = spawnTracked("payments", process.execPath, [path.join(ctx.root, "scripts/dev-fakes/payments-fake.mjs")], {
+    cwd: ctx.root,
+    env: { ...process.env, ...env },
+  });
+  let dead = false;
+  handle.exited.then(() => (dead = true));
+  const up = await waitForHttp(`http://127.0.0.1:${ctx.ports.payments}/health`, { timeoutMs: 15_000, ok: (s) => s === 200, isDead: () => dead });
+  if (!up) throw new Error(`the payments fake did not start:\n${handle.output()}`);
+  return env;
+}
+
 export const services = [
   { name: "PostgreSQL", start: startDatabase },
   { name: "mail catcher", start: startMailCatcher },
   { name: "object storage", start: startObjectStore },
+  { name: "payments fake", start: startPaymentsFake },
 ];
 
 /** Start every service in order; returns the combined environment they describe. */

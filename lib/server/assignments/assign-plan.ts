@@ -3,6 +3,7 @@ import { and, eq, inArray, isNull } from "drizzle-orm";
 import type { Tx } from "@/db/client";
 import { assignments, athletePositions, blockSlots, planDayBlocks, plans } from "@/db/schema";
 import { localDateOf } from "@/lib/engine";
+import { assertCanReceiveAssignment } from "@/lib/server/billing/assert-can-receive-assignment";
 import { invalidField } from "@/lib/errors";
 import type { Actor } from "@/lib/server/actor";
 import { firstLiveRungs } from "@/lib/server/blocks/rungs-for-estimate";
@@ -35,6 +36,7 @@ export async function assignPlan(
     .where(and(eq(plans.id, input.planId), eq(plans.teamId, actor.teamId), isNull(plans.archivedAt)))
     .for("share");
   if (!plan) throw invalidField("planId", "No live plan with this id in your team.");
+  for (const athleteId of athleteIds) await assertCanReceiveAssignment(tx, actor.teamId, athleteId);
 
   const ladderRows = await tx
     .selectDistinct({ ladderId: blockSlots.ladderId })
