@@ -72,6 +72,11 @@ export function RungCard({
         </p>
       ) : null}
       <ReadinessBar readiness={rung.readiness} />
+      {rung.explanation ? (
+        <p className="text-sm text-muted" data-testid="verdict-explanation">
+          {rung.explanation}
+        </p>
+      ) : null}
       <div>
         <p className="text-sm font-semibold">Sets today</p>
         {logged.length === 0 && pending.length === 0 ? <p className="text-sm text-muted">None yet.</p> : null}

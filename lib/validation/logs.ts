@@ -166,6 +166,8 @@ export const ZTodayRung = z
     standardText: z.string().nullable(),
     readiness: z.number(),
     status: z.string(),
+    /** The engine's verdict in plain words: "2 of 3 sessions met — needs 3 more days on this rung". */
+    explanation: z.string().nullable(),
     since: z.string(),
     /** Entries already logged on this rung on the day (all posts), oldest first. */
     logged: z.array(ZLogEntryDto.extend({ logId: z.uuid() })),

@@ -11,7 +11,9 @@ test("the owner sells an offer; an invited athlete pays on the test checkout and
   await page.getByLabel("Password").fill("northgate-strong-pass");
   await page.getByLabel("Time zone").fill("Europe/Dublin");
   await page.getByRole("button", { name: "Create my team" }).click();
-  await expect(page.getByRole("heading", { name: "Athletes" })).toBeVisible({ timeout: 45_000 });
+  await expect(page).toHaveURL(/\/coach/, { timeout: 45_000 });
+  await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Athletes" }).click();
+  await expect(page.getByRole("heading", { name: "Athletes" })).toBeVisible();
 
   // Offer: an absurd price is refused next to the field, then a real one is created.
   await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Billing" }).click();

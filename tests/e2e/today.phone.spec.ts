@@ -41,6 +41,7 @@ test("an athlete logs sets with the timer, keeps logging offline through a reloa
   // Signed in once the session cookie is set; then open Today directly.
   await expect.poll(async () => (await context.cookies()).some((c) => c.name.endsWith("authjs.session-token")), { timeout: 30_000 }).toBe(true);
   await page.goto("/today");
+  await expect(page.getByTestId("verdict-explanation").first()).not.toBeEmpty();
   await expect(page).toHaveURL(/\/today$/);
   await expect(page.getByRole("heading", { name: /^Hi / })).toBeVisible();
   await expect(page.getByText(/does not replace a qualified coach/).first()).toBeVisible();

@@ -114,12 +114,14 @@ describe("who may log for whom", () => {
     await postLogAs(token, { performedOn: today(), entries: [{ rungId: rung.rungId, sets: [{ value: 22 }], pain: false }] });
     const res = await call(myToday, { token, path: "/api/v1/me/today" });
     expect(res.status).toBe(200);
-    const data = res.data as unknown as { date: string; blocks: unknown[]; positions: { rungId: string; standardText: string; logged: { sets: unknown[] }[] }[] };
+    const data = res.data as unknown as { date: string; blocks: unknown[]; positions: { rungId: string; standardText: string; explanation: string | null; logged: { sets: unknown[] }[] }[] };
     expect(data.date).toBe(today());
     expect(data.blocks).toEqual([]);
     const position = data.positions.find((p) => p.rungId === rung.rungId)!;
     expect(position.standardText).toMatch(/sets of at least 45 s/);
     expect(position.logged[0]!.sets).toEqual([{ value: 22 }]);
+    // One short set today: the engine explains what is still missing, in plain words.
+    expect(position.explanation).toMatch(/^0 of \d sessions met/);
     // Another date shows nothing logged yet.
     const other = await call(myToday, { token, path: `/api/v1/me/today?date=${addDays(today(), -3)}` });
     const otherData = other.data as unknown as { positions: { logged: unknown[] }[] };

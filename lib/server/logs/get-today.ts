@@ -6,6 +6,7 @@ import { localDateOf } from "@/lib/engine/local-date";
 import { describeStandard } from "@/lib/engine/standard-text";
 import type { Actor } from "@/lib/server/actor";
 import { getAthlete } from "@/lib/server/athletes/get-athlete";
+import { getPositionVerdict } from "@/lib/server/promotions/get-position-verdict";
 import type { TodayDto, TodayRung } from "@/lib/validation/logs";
 import { entryColumns, toEntryDto } from "./log-dto";
 import { plannedBlocksFor } from "./today-plan";
@@ -64,7 +65,16 @@ export async function getToday(actor: Actor, athleteId: string, date?: string): 
     plannedBlocksFor(actor, athleteId, day),
   ]);
 
-  const positions: TodayRung[] = positionRows.map((p) => ({
+  // The live verdict per position, so the athlete reads why they are (not yet) moving up.
+  const explanations = await Promise.all(
+    positionRows.map((p) =>
+      getPositionVerdict(actor, { athleteId, ladderId: p.ladderId }).then(
+        (v) => v.explanation,
+        () => null,
+      ),
+    ),
+  );
+  const positions: TodayRung[] = positionRows.map((p, i) => ({
     ladderId: p.ladderId,
     ladderName: p.ladderName,
     rungId: p.rungId,
@@ -77,6 +87,7 @@ export async function getToday(actor: Actor, athleteId: string, date?: string): 
     standardText: p.standard ? describeStandard(p.measure, p.standard) : null,
     readiness: p.readiness,
     status: p.status,
+    explanation: explanations[i] ?? null,
     since: p.since,
     logged: entryRows.filter((e) => e.rungId === p.rungId).map((e) => ({ ...toEntryDto(e), logId: e.logId })),
   }));
