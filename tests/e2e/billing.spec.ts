@@ -48,7 +48,7 @@ test("the owner sells an offer; an invited athlete pays on the test checkout and
   await expect(athletePage).toHaveURL(/\/today$/);
 
   // Membership → Pay → the fake's hosted checkout → back on the membership page, active.
-  await athletePage.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Membership" }).click();
+  await athletePage.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Member" }).click(); // the phone tab bar shows short labels
   await expect(athletePage.getByText("Test mode: payments go to a development fake")).toBeVisible();
   await expect(athletePage.getByText("Rings monthly")).toBeVisible();
   await athletePage.getByRole("button", { name: "Pay" }).click();

@@ -24,7 +24,11 @@ test("the demo coach reviews a chosen week, filters to ready, approves from the 
   await week.fill(current);
   await expect(page.getByText(`Week ${current} (`)).toBeVisible();
 
-  await page.getByLabel("Show").selectOption("ready");
+  // Wait for the filtered page itself: the table keeps showing the previous rows while it loads.
+  await Promise.all([
+    page.waitForResponse((r) => r.url().includes("/api/v1/readiness") && r.url().includes("status=ready")),
+    page.getByLabel("Show").selectOption("ready"),
+  ]);
   // The demo seed leaves a promotion waiting for approval on an approve-mode ladder.
   const approve = table.getByRole("button", { name: /Approve the promotion of/ }).first();
   await expect(approve).toBeEnabled();
