@@ -22,7 +22,10 @@ export function parseWith<S extends z.ZodType>(schema: S, value: unknown, what =
 export async function readJson(request: Request, maxBytes: number): Promise<unknown> {
   const declared = Number(request.headers.get("content-length") ?? "0");
   if (declared > maxBytes) throw new PayloadTooLarge(`Request body is larger than ${maxBytes} bytes.`);
-  const text = await request.text();
+  // A client that hangs up mid-body is its own failure, not ours: answer 400, never 500.
+  const text = await request.text().catch(() => {
+    throw new BadRequest("Request body could not be read.");
+  });
   if (Buffer.byteLength(text) > maxBytes) throw new PayloadTooLarge(`Request body is larger than ${maxBytes} bytes.`);
   if (text.trim() === "") throw new BadRequest("Request body must be JSON.");
   try {
