@@ -6,8 +6,7 @@ export default defineConfig([
   ...nextVitals,
   ...nextTs,
   globalIgnores([
-    ".next/**",
-    ".next-e2e/**",
+    ".next*/**", // every build folder: .next, .next-e2e (tests), .next-bench (benchmarks)
     ".data/**",
     ".data-test/**",
     "node_modules/**",
