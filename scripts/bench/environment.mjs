@@ -54,14 +54,14 @@ export async function startPostgres() {
   // fsync stays on: the floor and the endpoint pay the same commit cost. More clients than the bench opens.
   asPg(path.join(bin, "pg_ctl"), [
     "-D", data, "-w", "-l", path.join(data, "log"),
-    "-o", `-p ${port} -k ${data} -c listen_addresses=127.0.0.1 -c max_connections=300 -c shared_buffers=256MB`,
+    "-o", `-p ${port} -k ${data} -c listen_addresses=127.0.0.1 -c max_connections=300 -c shared_buffers=256MB${process.env.BENCH_PGSS ? " -c shared_preload_libraries=pg_stat_statements -c pg_stat_statements.track_planning=on" : ""}`,
     "start",
   ]);
   stoppers.push(async () => {
     asPg(path.join(bin, "pg_ctl"), ["-D", data, "-m", "fast", "stop"]);
     fs.rmSync(dir, { recursive: true, force: true });
   });
-  return { url: `postgres://postgres@127.0.0.1:${port}/postgres`, port };
+  return { url: `postgres://postgres@127.0.0.1:${port}/postgres`, socketUrl: `postgres://postgres@${encodeURIComponent(data)}:${port}/postgres`, port };
 }
 
 function run(command, args, options) {

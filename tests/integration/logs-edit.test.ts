@@ -2,7 +2,7 @@ import { and, eq } from "drizzle-orm";
 import { describe, expect, it, vi } from "vitest";
 import { DELETE as deleteLog, PATCH as patchLog } from "@/app/api/v1/logs/[id]/route";
 import { db } from "@/db/client";
-import { auditEvents, logEntries, logs } from "@/db/schema";
+import { athletePositions, auditEvents, logEntries, logs } from "@/db/schema";
 import { addDays } from "@/lib/engine/calendar-date";
 import { localDateOf } from "@/lib/engine/local-date";
 import { loadRungSessions } from "@/lib/server/promotions/load-rung-sessions";
@@ -10,13 +10,21 @@ import { bearerFor, createMember, createTeam } from "../support/factories";
 import { call } from "../support/http";
 import { placeOn, postLogAs, starterRung } from "../support/logging-factories";
 
-const evaluated = vi.hoisted(() => [] as { logId: string; rungs: { rungId: string }[] }[]);
+const evaluated = vi.hoisted(() => [] as { logId: string; positionIds: string[] }[]);
 vi.mock("@/lib/server/promotions/evaluate-after-log", () => ({
-  evaluateAfterLog: async (_tx: unknown, _actor: unknown, input: { logId: string; rungs: { rungId: string }[] }) => {
+  evaluateLockedPositions: async (_tx: unknown, _actor: unknown, input: { logId: string; positionIds: string[] }) => {
     evaluated.push(input);
     return [];
   },
 }));
+
+async function positionIdOf(athleteId: string, ladderId: string): Promise<string> {
+  const [row] = await db
+    .select({ id: athletePositions.id })
+    .from(athletePositions)
+    .where(and(eq(athletePositions.athleteId, athleteId), eq(athletePositions.ladderId, ladderId)));
+  return row!.id;
+}
 
 const ZONE = "Europe/Amsterdam";
 
@@ -35,8 +43,8 @@ async function logOn(token: string, rungId: string, performedOn: string) {
 }
 
 describe("editing and deleting logs", () => {
-  it("passes only current-rung entries to the evaluation", async () => {
-    const { teamId, token, rung, today } = await setup();
+  it("passes only the positions whose current rung was logged to the evaluation", async () => {
+    const { teamId, me, token, rung, today } = await setup();
     const easier = await starterRung(teamId, "freestanding-handstand", "wall-walk-up");
     const res = await postLogAs(token, {
       performedOn: today,
@@ -47,7 +55,8 @@ describe("editing and deleting logs", () => {
       ],
     });
     const call_ = evaluated.find((e) => e.logId === res.data.id);
-    expect(call_?.rungs).toEqual([{ ladderId: rung.ladderId, rungId: rung.rungId }]);
+    // The warm-up rung and the current rung share one ladder: one position, evaluated once.
+    expect(call_?.positionIds).toEqual([await positionIdOf(me.actor.athleteId!, rung.ladderId)]);
   });
 
   it("changes sets, pain, note and session figures within 7 days, audited with before and after", async () => {
@@ -61,7 +70,8 @@ describe("editing and deleting logs", () => {
     });
     expect(res.status).toBe(200);
     expect(res.data).toMatchObject({ durationMinutes: 50, sessionRpe: 6, entries: [{ bestValue: 31, pain: true, note: "left wrist" }] });
-    expect(evaluated.some((e) => e.logId === log.id && e.rungs[0]?.rungId === rung.rungId)).toBe(true);
+    // Evaluated once on creation and once more after the edit, each time for the one position.
+    expect(evaluated.filter((e) => e.logId === log.id).map((e) => e.positionIds.length)).toEqual([1, 1]);
     const [audit] = await db.select().from(auditEvents).where(and(eq(auditEvents.subjectId, log.id), eq(auditEvents.action, "log.updated")));
     const data = audit!.data as { before: { durationMinutes: unknown; entries: { sets: unknown }[] }; after: { durationMinutes: unknown } };
     expect(data.before.durationMinutes).toBeNull();

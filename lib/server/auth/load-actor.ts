@@ -23,6 +23,8 @@ export const loadActor = cache(async (userId: string): Promise<Actor | null> => 
     .from(users)
     .innerJoin(teams, eq(teams.id, users.teamId))
     .leftJoin(athletes, and(eq(athletes.userId, users.id), eq(athletes.teamId, users.teamId)))
-    .where(and(eq(users.id, userId), isNull(users.disabledAt)));
+    .where(and(eq(users.id, userId), isNull(users.disabledAt)))
+    .prepare("actor_by_user")
+    .execute();
   return row ?? null;
 });

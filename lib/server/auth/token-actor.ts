@@ -31,7 +31,9 @@ export async function actorFromApiToken(token: string): Promise<Actor | null> {
     .innerJoin(users, and(eq(users.id, apiTokens.userId), isNull(users.disabledAt)))
     .innerJoin(teams, eq(teams.id, users.teamId))
     .leftJoin(athletes, and(eq(athletes.userId, users.id), eq(athletes.teamId, users.teamId)))
-    .where(and(eq(apiTokens.tokenHash, hashToken(token)), isNull(apiTokens.revokedAt)));
+    .where(and(eq(apiTokens.tokenHash, hashToken(token)), isNull(apiTokens.revokedAt)))
+    .prepare("actor_by_token")
+    .execute();
   if (!row || !tokenMatches(token, row.tokenHash)) return null;
   if (!row.lastUsedAt || Date.now() - row.lastUsedAt.getTime() > LAST_USED_RESOLUTION_MS) {
     // Best effort, off the response path: a failed stamp must not fail the request.

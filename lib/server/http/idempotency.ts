@@ -59,55 +59,56 @@ function sweepNowAndThen(): void {
 }
 
 /**
- * Runs a write at most once per (caller, route, key):
- * 1. claims the key with its own short INSERT … ON CONFLICT DO NOTHING (committed at once, so a
- *    concurrent request with the same key sees it);
- * 2. runs the operation in a transaction and stores the response in that same transaction, so a
- *    committed write always has its stored answer;
- * 3. on failure deletes the claim, so a retry can proceed.
- * A replay with the same body answers the stored status and body; a different body, or a replay
- * while the first request is still running, is 409.
+ * Runs a write at most once per (caller, route, key), in one transaction:
+ * 1. claims the key first: an INSERT … ON CONFLICT DO NOTHING guarded by a transaction-scoped
+ *    advisory lock on the key, so a concurrent request with the same key learns at once that the
+ *    first is still running (409) instead of queueing behind it;
+ * 2. runs the operation and stores its response in the same transaction, so a committed write
+ *    always has its stored answer, and a failed one leaves no claim behind (the rollback frees it);
+ * 3. a key already used answers from the stored row: the same body gets the original status and
+ *    body, a different body is 409.
  */
-export async function withIdempotency(
-  request: IdempotentRequest,
-  operation: (tx: Tx) => Promise<unknown>,
-  attempt = 0,
-): Promise<Response> {
-  if (attempt === 0) sweepNowAndThen();
+export async function withIdempotency(request: IdempotentRequest, operation: (tx: Tx) => Promise<unknown>): Promise<Response> {
+  sweepNowAndThen();
   const hash = requestHash(request.body);
-  const [claimed] = await db
-    .insert(idempotencyKeys)
-    .values({ ownerId: request.ownerId, scope: request.scope, key: request.key, requestHash: hash })
-    .onConflictDoNothing()
-    .returning({ id: idempotencyKeys.id });
-  if (!claimed) return replay(request, hash, operation, attempt);
-
-  try {
-    const result = await db.transaction(async (tx) => {
-      const value = await operation(tx);
-      await tx
-        .update(idempotencyKeys)
-        .set({ state: "done", responseStatus: request.status, responseBody: value ?? null })
-        .where(eq(idempotencyKeys.id, claimed.id));
-      return value;
-    });
-    return NextResponse.json(result, { status: request.status });
-  } catch (error) {
-    await db
-      .delete(idempotencyKeys)
-      .where(eq(idempotencyKeys.id, claimed.id))
-      .catch(() => undefined);
-    throw error;
+  type Outcome = { replay: { status: number; body: unknown } } | { replay: null; value: unknown };
+  const outcome = await db.transaction(async (tx): Promise<Outcome> => {
+    const claimId = await claim(tx, request, hash);
+    if (!claimId) return { replay: await storedAnswer(tx, request, hash) };
+    const value = await operation(tx);
+    await tx
+      .update(idempotencyKeys)
+      .set({ state: "done", responseStatus: request.status, responseBody: value ?? null })
+      .where(eq(idempotencyKeys.id, claimId))
+      .prepare("idempotency_done")
+      .execute();
+    return { replay: null, value };
+  });
+  if (outcome.replay) {
+    const { status, body } = outcome.replay;
+    return NextResponse.json(body, { status, headers: { "idempotent-replayed": "true" } });
   }
+  return NextResponse.json(outcome.value, { status: request.status });
 }
 
-async function replay(
-  request: IdempotentRequest,
-  hash: string,
-  operation: (tx: Tx) => Promise<unknown>,
-  attempt: number,
-): Promise<Response> {
-  const [row] = await db
+/** The claim's id, or null when the key is taken (stored, or held by a request still running). */
+async function claim(tx: Tx, request: IdempotentRequest, hash: string): Promise<string | null> {
+  const lockKey = `${request.ownerId}\n${request.scope}\n${request.key}`;
+  const result = await tx.execute<{ id: string }>(sql`
+    insert into ${idempotencyKeys} (owner_id, scope, key, request_hash)
+    select ${request.ownerId}::uuid, ${request.scope}, ${request.key}, ${hash}
+    where pg_try_advisory_xact_lock(hashtextextended(${lockKey}, 0))
+    on conflict do nothing
+    returning id`);
+  return result.rows[0]?.id ?? null;
+}
+
+/**
+ * The answer stored for a key that could not be claimed. No committed row means the first request
+ * still holds the key (it commits its claim and answer together), so: 409, retry shortly.
+ */
+async function storedAnswer(tx: Tx, request: IdempotentRequest, hash: string): Promise<{ status: number; body: unknown }> {
+  const [row] = await tx
     .select({
       requestHash: idempotencyKeys.requestHash,
       state: idempotencyKeys.state,
@@ -118,12 +119,7 @@ async function replay(
     .where(
       and(eq(idempotencyKeys.ownerId, request.ownerId), eq(idempotencyKeys.scope, request.scope), eq(idempotencyKeys.key, request.key)),
     );
-  if (!row) {
-    // The first request failed and released the key between our insert and this read: claim it again, once.
-    if (attempt === 0) return withIdempotency(request, operation, 1);
-    throw new Conflict("A request with this Idempotency-Key is still being processed; retry shortly.");
-  }
-  if (row.requestHash !== hash) throw new Conflict("This Idempotency-Key was already used with a different body.");
-  if (row.state !== "done") throw new Conflict("A request with this Idempotency-Key is still being processed; retry shortly.");
-  return NextResponse.json(row.responseBody, { status: row.responseStatus ?? 200, headers: { "idempotent-replayed": "true" } });
+  if (row && row.requestHash !== hash) throw new Conflict("This Idempotency-Key was already used with a different body.");
+  if (!row || row.state !== "done") throw new Conflict("A request with this Idempotency-Key is still being processed; retry shortly.");
+  return { status: row.responseStatus ?? 200, body: row.responseBody };
 }

@@ -4,13 +4,13 @@ import { logEntries, logs } from "@/db/schema";
 import { sessionBest } from "@/lib/engine/session-assessment";
 import type { Actor } from "@/lib/server/actor";
 import { withIdempotency } from "@/lib/server/http/idempotency";
-import { evaluateAfterLog } from "@/lib/server/promotions/evaluate-after-log";
+import { evaluateLockedPositions } from "@/lib/server/promotions/evaluate-after-log";
 import type { CreateLog, LogWithVerdicts } from "@/lib/validation/logs";
 import { checkSets } from "./check-sets";
 import { assertLoggableDate } from "./log-dates";
 import { logAthleteOf } from "./log-athlete";
 import { toLogDto } from "./log-dto";
-import { currentRungs, logRungsOf } from "./log-rungs";
+import { currentPositions, logRungsOf } from "./log-rungs";
 
 export const CREATE_LOG_SCOPE = "POST /api/v1/logs";
 
@@ -24,10 +24,13 @@ export function createLog(actor: Actor, key: string, input: CreateLog): Promise<
   );
 }
 
-/** Validates against the team's rungs and the athlete's positions, then writes the log and its entries. */
+/**
+ * Validates against the team's rungs and the athlete's positions (locking those, so the verdicts
+ * that follow are computed under the lock), then writes the log and its entries and evaluates.
+ */
 export async function writeLog(tx: Tx, actor: Actor, input: CreateLog): Promise<LogWithVerdicts> {
   assertLoggableDate(input.performedOn, actor.timeZone);
-  const athleteId = await logAthleteOf(tx, actor, input.athleteId);
+  const athleteId = logAthleteOf(actor, input.athleteId);
   const rungList = await logRungsOf(
     tx,
     actor.teamId,
@@ -62,6 +65,6 @@ export async function writeLog(tx: Tx, actor: Actor, input: CreateLog): Promise<
     .insert(logEntries)
     .values(prepared.map((e) => ({ ...e, teamId: actor.teamId, logId: log!.id, athleteId, performedOn: input.performedOn })))
     .returning();
-  const verdicts = await evaluateAfterLog(tx, actor, { athleteId, logId: log!.id, rungs: currentRungs(rungList) });
+  const verdicts = await evaluateLockedPositions(tx, actor, { positionIds: currentPositions(rungList), logId: log!.id });
   return { ...toLogDto(log!, entries), verdicts };
 }

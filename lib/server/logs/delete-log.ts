@@ -3,9 +3,9 @@ import { and, eq, isNull } from "drizzle-orm";
 import { db } from "@/db/client";
 import { logEntries, logs } from "@/db/schema";
 import type { Actor } from "@/lib/server/actor";
-import { evaluateAfterLog } from "@/lib/server/promotions/evaluate-after-log";
+import { evaluateLockedPositions } from "@/lib/server/promotions/evaluate-after-log";
 import { auditLogChange, lockEditableLog, logSnapshot } from "./editable-log";
-import { currentRungs, logRungsOf } from "./log-rungs";
+import { currentPositions, lockPlacedRungs } from "./log-rungs";
 
 /** DELETE /api/v1/logs/{id}: a soft delete within the edit window, audited, then re-evaluated. */
 export async function deleteLog(actor: Actor, logId: string): Promise<undefined> {
@@ -19,8 +19,8 @@ export async function deleteLog(actor: Actor, logId: string): Promise<undefined>
       .where(and(eq(logEntries.logId, log.id), isNull(logEntries.deletedAt)));
     await auditLogChange(tx, actor, log.id, "log.deleted", { before: logSnapshot(log, entries) });
     // Positions whose ladder the athlete has since left need no re-evaluation.
-    const placed = await logRungsOf(tx, actor.teamId, log.athleteId, entries.map((e) => e.rungId)).catch(() => []);
-    await evaluateAfterLog(tx, actor, { athleteId: log.athleteId, logId: log.id, rungs: currentRungs(placed) });
+    const placed = await lockPlacedRungs(tx, actor.teamId, log.athleteId, entries.map((e) => e.rungId));
+    await evaluateLockedPositions(tx, actor, { positionIds: currentPositions([...placed.values()]), logId: log.id });
   });
   return undefined;
 }

@@ -1,7 +1,7 @@
 import "server-only";
-import { and, eq, inArray } from "drizzle-orm";
-import type { Queryable } from "@/db/client";
-import { athletePositions, rungs } from "@/db/schema";
+import { and, asc, eq, sql } from "drizzle-orm";
+import type { Queryable, Tx } from "@/db/client";
+import { athletePositions, athletes, rungs } from "@/db/schema";
 import type { Measure } from "@/lib/engine/types";
 import { NotFound, Unprocessable, type FieldIssue } from "@/lib/errors";
 
@@ -9,43 +9,89 @@ export interface LogRung {
   rungId: string;
   ladderId: string;
   measure: Measure;
+  /** The athlete's position on the rung's ladder (locked by this transaction). */
+  positionId: string;
   /** The athlete's current rung on that ladder: only these count toward promotion. */
   isCurrent: boolean;
 }
 
 /**
- * The rungs a log names, in one query with the athlete's positions. Another team's rung is not
- * found (404); a rung of a ladder the athlete is not placed on is a 422 at `<path>.N.rungId`.
- * Easier or harder rungs of a placed ladder are accepted (warm-ups, a phone syncing after a move).
+ * Locks the athlete's positions on the ladders of these rungs (FOR UPDATE, in ladder-id order, the
+ * order every writer uses, so two transactions can never deadlock) and returns the rungs found on
+ * those ladders. Read under the lock, `isCurrent` already reflects any concurrent promotion. One
+ * named statement on the hot logging path.
+ */
+export async function lockPlacedRungs(tx: Tx, teamId: string, athleteId: string, rungIds: readonly string[]): Promise<Map<string, LogRung>> {
+  const rows = await tx
+    .select({
+      rungId: rungs.id,
+      ladderId: rungs.ladderId,
+      measure: rungs.measure,
+      positionId: athletePositions.id,
+      currentRungId: athletePositions.rungId,
+    })
+    .from(rungs)
+    .innerJoin(
+      athletePositions,
+      and(eq(athletePositions.ladderId, rungs.ladderId), eq(athletePositions.athleteId, athleteId), eq(athletePositions.teamId, teamId)),
+    )
+    .where(and(sql`${rungs.id} = any(${sql.param([...new Set(rungIds)])}::uuid[])`, eq(rungs.teamId, teamId)))
+    .orderBy(asc(athletePositions.ladderId))
+    .for("update", { of: athletePositions })
+    .prepare("lock_placed_rungs")
+    .execute();
+  return new Map(
+    rows.map((r) => [r.rungId, { rungId: r.rungId, ladderId: r.ladderId, measure: r.measure, positionId: r.positionId, isCurrent: r.currentRungId === r.rungId }]),
+  );
+}
+
+/**
+ * The rungs a log names, with the athlete's positions locked. Returns only when every rung lies on
+ * a ladder this athlete of this team is placed on, which also proves the athlete is of the team.
+ * Otherwise: an athlete of another team is not found (404), so is another team's rung; a rung of a
+ * ladder the athlete is not placed on is a 422 at `<path>.N.rungId`. Easier or harder rungs of a
+ * placed ladder are accepted (warm-ups, a phone syncing after a move).
  */
 export async function logRungsOf(
-  q: Queryable,
+  tx: Tx,
   teamId: string,
   athleteId: string,
   rungIds: readonly string[],
   path = "entries",
 ): Promise<LogRung[]> {
-  const distinct = [...new Set(rungIds)];
-  const rows = await q
-    .select({ rungId: rungs.id, ladderId: rungs.ladderId, measure: rungs.measure, currentRungId: athletePositions.rungId })
-    .from(rungs)
-    .leftJoin(athletePositions, and(eq(athletePositions.ladderId, rungs.ladderId), eq(athletePositions.athleteId, athleteId)))
-    .where(and(inArray(rungs.id, distinct), eq(rungs.teamId, teamId)));
-  const byId = new Map(rows.map((r) => [r.rungId, r]));
-  const issues: FieldIssue[] = [];
-  const result = rungIds.map((rungId, i) => {
-    const row = byId.get(rungId);
-    if (!row) throw new NotFound("rung");
-    if (row.currentRungId === null) issues.push({ path: `${path}.${i}.rungId`, message: "The athlete is not placed on this rung's ladder." });
-    return { rungId, ladderId: row.ladderId, measure: row.measure, isCurrent: row.currentRungId === rungId };
-  });
-  if (issues.length > 0) throw new Unprocessable("Some entries name a ladder the athlete is not on.", issues);
-  return result;
+  const placed = await lockPlacedRungs(tx, teamId, athleteId, rungIds);
+  if (rungIds.every((id) => placed.has(id))) return rungIds.map((id) => placed.get(id)!);
+  throw await whyNotPlaced(tx, teamId, athleteId, rungIds, placed, path);
 }
 
-/** Distinct current rungs among logged ones, for evaluateAfterLog. */
-export function currentRungs(list: readonly { ladderId: string; rungId: string; isCurrent: boolean }[]) {
-  const seen = new Map<string, { ladderId: string; rungId: string }>();
-  for (const r of list) if (r.isCurrent) seen.set(r.rungId, { ladderId: r.ladderId, rungId: r.rungId });
-  return [...seen.values()];
+/** The error for a log naming rungs the athlete cannot log: checked in the order a person reads it. */
+async function whyNotPlaced(
+  q: Queryable,
+  teamId: string,
+  athleteId: string,
+  rungIds: readonly string[],
+  placed: Map<string, LogRung>,
+  path: string,
+): Promise<Error> {
+  const [athlete] = await q
+    .select({ id: athletes.id })
+    .from(athletes)
+    .where(and(eq(athletes.id, athleteId), eq(athletes.teamId, teamId)));
+  if (!athlete) return new NotFound("athlete");
+  const missing = rungIds.filter((id) => !placed.has(id));
+  const known = await q
+    .select({ id: rungs.id })
+    .from(rungs)
+    .where(and(sql`${rungs.id} = any(${sql.param(missing)}::uuid[])`, eq(rungs.teamId, teamId)));
+  const ofTeam = new Set(known.map((r) => r.id));
+  if (missing.some((id) => !ofTeam.has(id))) return new NotFound("rung");
+  const issues: FieldIssue[] = rungIds.flatMap((id, i) =>
+    placed.has(id) ? [] : [{ path: `${path}.${i}.rungId`, message: "The athlete is not placed on this rung's ladder." }],
+  );
+  return new Unprocessable("Some entries name a ladder the athlete is not on.", issues);
+}
+
+/** The distinct positions holding a logged rung as their current one, for evaluateLockedPositions. */
+export function currentPositions(list: readonly LogRung[]): string[] {
+  return [...new Set(list.filter((r) => r.isCurrent).map((r) => r.positionId))];
 }

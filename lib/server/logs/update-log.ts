@@ -5,11 +5,11 @@ import { logEntries, logs } from "@/db/schema";
 import { sessionBest } from "@/lib/engine/session-assessment";
 import { Unprocessable, type FieldIssue } from "@/lib/errors";
 import type { Actor } from "@/lib/server/actor";
-import { evaluateAfterLog } from "@/lib/server/promotions/evaluate-after-log";
+import { evaluateLockedPositions } from "@/lib/server/promotions/evaluate-after-log";
 import type { LogWithVerdicts, UpdateLog } from "@/lib/validation/logs";
 import { checkSets } from "./check-sets";
 import { auditLogChange, lockEditableLog, logSnapshot } from "./editable-log";
-import { currentRungs, logRungsOf } from "./log-rungs";
+import { currentPositions, logRungsOf } from "./log-rungs";
 
 /**
  * PATCH /api/v1/logs/{id}: session minutes and RPE, and the sets, pain flag and note of existing
@@ -51,7 +51,7 @@ export async function updateLog(actor: Actor, logId: string, patch: UpdateLog): 
 
     const after = logSnapshot(log, entries);
     await auditLogChange(tx, actor, log.id, "log.updated", { before, after });
-    const verdicts = await evaluateAfterLog(tx, actor, { athleteId: log.athleteId, logId: log.id, rungs: currentRungs(rungList) });
+    const verdicts = await evaluateLockedPositions(tx, actor, { positionIds: currentPositions(rungList), logId: log.id });
     return { ...after, verdicts };
   });
 }

@@ -12,15 +12,9 @@ export interface LoggedRung {
 }
 
 /**
- * Called by the log operations inside the log's transaction, after the entries are written:
- * evaluates every position the log touched (locking the positions in ladder-id order, so two
- * transactions locking the same athlete's ladders can never deadlock), applies or proposes
- * promotions exactly once, keeps the positions' derived figures current and returns one verdict
- * per ladder logged.
- *
- * When a concurrent transaction moved the athlete off the logged rung before this one got the
- * lock, the verdict returned is the one of the rung they stand on now (the log's entries stay on
- * the rung they were done on and no longer count toward the new one).
+ * Evaluates every position a log touched, locking the positions first in ladder-id order (so two
+ * transactions locking the same athlete's ladders can never deadlock), then as
+ * evaluateLockedPositions. For callers that have not locked them yet (tests, tools).
  */
 export async function evaluateAfterLog(
   tx: Tx,
@@ -31,7 +25,7 @@ export async function evaluateAfterLog(
   const ladderIds = [...new Set(input.rungs.map((r) => r.ladderId))];
   if (ladderIds.length === 0) return [];
   const positions = await tx
-    .select({ id: athletePositions.id, ladderId: athletePositions.ladderId })
+    .select({ id: athletePositions.id })
     .from(athletePositions)
     .where(
       and(
@@ -42,10 +36,26 @@ export async function evaluateAfterLog(
     )
     .orderBy(asc(athletePositions.ladderId))
     .for("update");
+  return evaluateLockedPositions(tx, actor, { positionIds: positions.map((p) => p.id), logId: input.logId }, asOf);
+}
 
+/**
+ * Called by the log operations inside the log's transaction, after the entries are written and
+ * with the positions already locked by this transaction (logRungsOf): applies or proposes
+ * promotions exactly once, keeps the positions' derived figures current and returns one verdict
+ * per position. The caller passes the positions whose current rung the log names, as read under
+ * the lock: when a concurrent log moved the athlete up first, the rung logged is no longer current
+ * and, like a warm-up on an easier rung, yields no verdict (its entries stay where they were done).
+ */
+export async function evaluateLockedPositions(
+  tx: Tx,
+  actor: Actor,
+  input: { positionIds: string[]; logId: string },
+  asOf: Date = new Date(),
+): Promise<VerdictDto[]> {
   const verdicts: VerdictDto[] = [];
-  for (const position of positions) {
-    verdicts.push(await evaluatePosition(tx, { positionId: position.id, asOf, actor, logId: input.logId }));
+  for (const positionId of input.positionIds) {
+    verdicts.push(await evaluatePosition(tx, { positionId, asOf, actor, logId: input.logId, locked: true }));
   }
   return verdicts;
 }

@@ -11,7 +11,6 @@ import { loadPositionContext, type PositionContext } from "./load-position-conte
 import { movePosition } from "./move-position";
 import {
   declinedWithoutNewEvidence,
-  pendingPromotionOf,
   recordAutoPromotion,
   recordPendingPromotion,
   type PromotionDraft,
@@ -27,9 +26,17 @@ export interface EvaluatePositionInput {
   actor: EvaluationActor;
   /** The log that triggered the evaluation, kept on any promotion it causes. */
   logId?: string | null;
+  /** The caller already holds the position's row lock (the log paths lock while validating). */
+  locked?: boolean;
 }
 
-type Outcome = { promotedTo: string | null; pendingPromotionId: string | null; achieved: boolean };
+type Outcome = {
+  promotedTo: string | null;
+  pendingPromotionId: string | null;
+  /** The direction of the proposal now waiting for a coach, if any. */
+  pendingDirection: "up" | "down" | null;
+  achieved: boolean;
+};
 
 /**
  * The one code path from evidence to promotion. Locks the position row (FOR UPDATE) and re-reads
@@ -47,7 +54,7 @@ type Outcome = { promotedTo: string | null; pendingPromotionId: string | null; a
  */
 export async function evaluatePosition(tx: Tx, input: EvaluatePositionInput): Promise<VerdictDto> {
   const teamId = input.actor === "system" ? undefined : input.actor.teamId;
-  const ctx = await loadPositionContext(tx, { positionId: input.positionId, teamId, lock: true });
+  const ctx = await loadPositionContext(tx, { positionId: input.positionId, teamId, lock: !input.locked });
   if (!ctx) throw new NotFound("position");
   const judged = await judgePosition(tx, ctx, input.asOf);
   const outcome = await act(tx, ctx, judged, input);
@@ -55,18 +62,21 @@ export async function evaluatePosition(tx: Tx, input: EvaluatePositionInput): Pr
   if (outcome.promotedTo) {
     // The athlete is on a new rung: its figures start from the evidence there (usually none yet).
     const moved = await loadPositionContext(tx, { positionId: ctx.position.id });
-    if (moved) await writeFigures(tx, moved, await judgePosition(tx, moved, input.asOf));
+    if (moved) {
+      const fresh = await judgePosition(tx, moved, input.asOf);
+      await writeFigures(tx, moved, fresh, { ...outcome, pendingDirection: moved.pending?.direction ?? null, achieved: false });
+    }
   } else {
-    await writeFigures(tx, ctx, judged);
+    await writeFigures(tx, ctx, judged, outcome);
   }
   return toVerdictDto({ ladderId: ctx.ladder.id, rungId: ctx.rung.id }, judged.verdict, judged.explanation, outcome);
 }
 
 async function act(tx: Tx, ctx: PositionContext, judged: Judgement, input: EvaluatePositionInput): Promise<Outcome> {
-  const none: Outcome = { promotedTo: null, pendingPromotionId: null, achieved: ctx.position.achievedAt !== null };
+  const none: Outcome = { promotedTo: null, pendingPromotionId: null, pendingDirection: null, achieved: ctx.position.achievedAt !== null };
   if (ctx.position.achievedAt) return none;
-  const pending = await pendingPromotionOf(tx, ctx.position.id);
-  if (pending) return { ...none, pendingPromotionId: pending.id };
+  // Read under the position lock: a proposal waits, so nothing new is proposed or applied.
+  if (ctx.pending) return { ...none, pendingPromotionId: ctx.pending.id, pendingDirection: ctx.pending.direction };
 
   const { verdict } = judged;
   const effectiveOn = verdict.lastSessionDate ?? judged.today;
@@ -81,7 +91,9 @@ async function act(tx: Tx, ctx: PositionContext, judged: Judgement, input: Evalu
   if (verdict.status === "met") {
     if (await declinedWithoutNewEvidence(tx, ctx, "up", effectiveOn)) return none;
     const toRungId = ctx.nextRung?.id ?? null;
-    if (ctx.ladder.promotionMode === "approve") return { ...none, pendingPromotionId: await propose(tx, ctx, draft("up", toRungId)) };
+    if (ctx.ladder.promotionMode === "approve") {
+      return { ...none, pendingPromotionId: await propose(tx, ctx, draft("up", toRungId)), pendingDirection: "up" };
+    }
     const promotionId = await recordAutoPromotion(tx, ctx, draft("up", toRungId), input.asOf);
     await movePosition(tx, {
       positionId: ctx.position.id,
@@ -98,12 +110,12 @@ async function act(tx: Tx, ctx: PositionContext, judged: Judgement, input: Evalu
       at: input.asOf,
     });
     await enqueueNotice(tx, { kind: "promotion", promotionId });
-    return { promotedTo: toRungId, pendingPromotionId: null, achieved: toRungId === null };
+    return { promotedTo: toRungId, pendingPromotionId: null, pendingDirection: null, achieved: toRungId === null };
   }
 
   if (verdict.status === "step_down" && ctx.previousRung) {
     if (await declinedWithoutNewEvidence(tx, ctx, "down", effectiveOn)) return none;
-    return { ...none, pendingPromotionId: await propose(tx, ctx, draft("down", ctx.previousRung.id)) };
+    return { ...none, pendingPromotionId: await propose(tx, ctx, draft("down", ctx.previousRung.id)), pendingDirection: "down" };
   }
   return none;
 }
@@ -115,30 +127,25 @@ async function propose(tx: Tx, ctx: PositionContext, draft: PromotionDraft): Pro
 }
 
 /** The figures the coach's tables sort and filter on, from the latest verdict and proposal. */
-async function writeFigures(tx: Tx, ctx: PositionContext, judged: Judgement): Promise<void> {
+async function writeFigures(tx: Tx, ctx: PositionContext, judged: Judgement, outcome: Outcome): Promise<void> {
   const { verdict } = judged;
-  const achieved = ctx.position.achievedAt !== null || (await isAchieved(tx, ctx.position.id));
-  const pending = achieved ? null : await pendingPromotionOf(tx, ctx.position.id);
-  const status = achieved
+  const status = outcome.achieved
     ? ("achieved" as const)
-    : pending
-      ? pending.direction === "up"
-        ? ("pending_approval" as const)
-        : ("step_down" as const)
-      : verdict.status;
+    : outcome.pendingDirection === "up"
+      ? ("pending_approval" as const)
+      : outcome.pendingDirection === "down"
+        ? ("step_down" as const)
+        : verdict.status;
   await tx
     .update(athletePositions)
     .set({
-      readiness: achieved ? 100 : verdict.readiness,
+      readiness: outcome.achieved ? 100 : verdict.readiness,
       status,
       lastSessionOn: verdict.lastSessionDate,
       lastPainOn: judged.lastPainOn,
       sessionsMet: verdict.sessionsMet,
     })
-    .where(eq(athletePositions.id, ctx.position.id));
-}
-
-async function isAchieved(tx: Tx, positionId: string): Promise<boolean> {
-  const [row] = await tx.select({ achievedAt: athletePositions.achievedAt }).from(athletePositions).where(eq(athletePositions.id, positionId));
-  return Boolean(row?.achievedAt);
+    .where(eq(athletePositions.id, ctx.position.id))
+    .prepare("position_figures")
+    .execute();
 }

@@ -7,7 +7,6 @@ import type { PositionVerdictDto } from "@/lib/validation/position-verdict";
 import { findVisiblePosition } from "./find-visible-position";
 import { judgePosition } from "./judge-position";
 import { loadPositionContext } from "./load-position-context";
-import { pendingPromotionOf } from "./record-promotion";
 import { toVerdictDto } from "./verdict-dto";
 
 /**
@@ -23,7 +22,8 @@ export async function getPositionVerdict(
   const positionId = await findVisiblePosition(db, actor, where.athleteId, where.ladderId);
   const ctx = await loadPositionContext(db, { positionId, teamId: actor.teamId });
   if (!ctx) throw new NotFound("position");
-  const [judged, pending] = await Promise.all([judgePosition(db, ctx, asOf), pendingPromotionOf(db, positionId)]);
+  const judged = await judgePosition(db, ctx, asOf);
+  const pending = ctx.pending;
   const achieved = ctx.position.achievedAt !== null;
   return {
     ...toVerdictDto({ ladderId: ctx.ladder.id, rungId: ctx.rung.id }, judged.verdict, judged.explanation, {

@@ -1,8 +1,7 @@
 import "server-only";
-import { and, asc, desc, eq, gt, isNull, lt, sql } from "drizzle-orm";
-import { alias } from "drizzle-orm/pg-core";
+import { and, eq, sql } from "drizzle-orm";
 import type { Queryable } from "@/db/client";
-import { athletePositions, athletes, ladders, rungPrerequisites, rungs, standards, teams } from "@/db/schema";
+import { athletePositions, athletes, ladders, rungs, standards, teams } from "@/db/schema";
 import type { Measure, PrerequisiteState, PromotionMode, Standard } from "@/lib/engine";
 import { standardOf } from "./standard-of";
 
@@ -35,20 +34,66 @@ export interface PositionContext {
   previousRung: RungRef | null;
   /** Prerequisites of the next rung, with whether the athlete has reached each. */
   prerequisites: PrerequisiteState[];
+  /** The proposal waiting for a coach on this position, if any (at most one). */
+  pending: { id: string; direction: "up" | "down" } | null;
 }
 
+/** The nearest live rung above the position's rung (archived rungs sit at ≤ 0). */
+const nextRung = sql<RungRef | null>`(
+  select json_build_object('id', r.id, 'name', r.name, 'position', r.position) from ${rungs} r
+  where r.ladder_id = ${athletePositions.ladderId} and r.archived_at is null and r.position > ${rungs.position}
+  order by r.position limit 1)`;
+
+/** The nearest live rung below it: the target of a step down. */
+const previousRung = sql<RungRef | null>`(
+  select json_build_object('id', r.id, 'name', r.name, 'position', r.position) from ${rungs} r
+  where r.ladder_id = ${athletePositions.ladderId} and r.archived_at is null and r.position < ${rungs.position} and r.position > 0
+  order by r.position desc limit 1)`;
+
 /**
- * Reads one position with its ladder, rung, standard, neighbours and prerequisites. `teamId` scopes
- * the read for a caller acting for a team; the system (daily job, seed) passes none. With `lock`,
- * the position row is locked FOR UPDATE first, so the rest is read under the lock.
+ * The next rung's prerequisites. One is reached when the athlete stands on that rung or a later one
+ * of its ladder, or has achieved that ladder's skill.
+ */
+const prerequisites = sql<PrerequisiteState[]>`(
+  select coalesce(json_agg(json_build_object(
+    'rungId', req.id, 'rungName', req.name, 'ladderName', l.name,
+    'reached', coalesce(ap.achieved_at is not null or st.position >= req.position, false)
+  ) order by l.name, req.position), '[]'::json)
+  from rung_prerequisites rp
+  join ${rungs} req on req.id = rp.requires_rung_id
+  join ${ladders} l on l.id = req.ladder_id
+  left join ${athletePositions} ap on ap.athlete_id = ${athletePositions.athleteId} and ap.ladder_id = req.ladder_id
+  left join ${rungs} st on st.id = ap.rung_id
+  where rp.rung_id = (
+    select r.id from ${rungs} r
+    where r.ladder_id = ${athletePositions.ladderId} and r.archived_at is null and r.position > ${rungs.position}
+    order by r.position limit 1))`;
+
+const pendingProposal = sql<PositionContext["pending"]>`(
+  select json_build_object('id', p.id, 'direction', p.direction) from promotions p
+  where p.position_id = ${athletePositions.id} and p.status = 'pending' limit 1)`;
+
+/**
+ * Reads one position with its ladder, rung, standard, neighbours, prerequisites and pending
+ * proposal in one named statement (the logging path runs it on every log). `teamId` scopes the
+ * read for a caller acting for a team; the system (daily job, seed) passes none. With `lock`, the
+ * position row is locked FOR UPDATE first, in its own statement, so this read (a fresh snapshot)
+ * sees every move committed before the lock was granted.
  */
 export async function loadPositionContext(
   q: Queryable,
   options: { positionId: string; teamId?: string; lock?: boolean },
 ): Promise<PositionContext | null> {
   const scope = and(eq(athletePositions.id, options.positionId), options.teamId ? eq(athletePositions.teamId, options.teamId) : undefined);
+  const variant = options.teamId ? "team" : "system";
   if (options.lock) {
-    const [locked] = await q.select({ id: athletePositions.id }).from(athletePositions).where(scope).for("update");
+    const [locked] = await q
+      .select({ id: athletePositions.id })
+      .from(athletePositions)
+      .where(scope)
+      .for("update")
+      .prepare(`lock_position_${variant}`)
+      .execute();
     if (!locked) return null;
   }
   const [row] = await q
@@ -79,6 +124,10 @@ export async function loadPositionContext(
         stepDown: standards.stepDown,
       },
       timeZone: teams.timeZone,
+      nextRung,
+      previousRung,
+      prerequisites,
+      pending: pendingProposal,
     })
     .from(athletePositions)
     .innerJoin(athletes, eq(athletes.id, athletePositions.athleteId))
@@ -86,13 +135,11 @@ export async function loadPositionContext(
     .innerJoin(rungs, eq(rungs.id, athletePositions.rungId))
     .innerJoin(teams, eq(teams.id, athletePositions.teamId))
     .leftJoin(standards, eq(standards.rungId, rungs.id))
-    .where(scope);
+    .where(scope)
+    .prepare(`position_context_${variant}`)
+    .execute();
   if (!row) return null;
 
-  const [nextRung, previousRung] = await Promise.all([
-    neighbour(q, row.ladder.id, row.rung.position, "up"),
-    neighbour(q, row.ladder.id, row.rung.position, "down"),
-  ]);
   const hasStandard = row.standard !== null && row.standard.sets !== null;
   return {
     position: row.position,
@@ -100,49 +147,9 @@ export async function loadPositionContext(
     rung: row.rung,
     standard: standardOf(row.rung.measure, hasStandard ? row.standard : null),
     timeZone: row.timeZone,
-    nextRung,
-    previousRung,
-    prerequisites: nextRung ? await prerequisitesOf(q, nextRung.id, row.position.athleteId) : [],
+    nextRung: row.nextRung,
+    previousRung: row.previousRung,
+    prerequisites: row.nextRung ? row.prerequisites : [],
+    pending: row.pending,
   };
-}
-
-/** The nearest live rung above or below a position on the ladder (archived rungs sit at ≤ 0). */
-async function neighbour(q: Queryable, ladderId: string, position: number, way: "up" | "down"): Promise<RungRef | null> {
-  const [row] = await q
-    .select({ id: rungs.id, name: rungs.name, position: rungs.position })
-    .from(rungs)
-    .where(
-      and(
-        eq(rungs.ladderId, ladderId),
-        isNull(rungs.archivedAt),
-        way === "up" ? gt(rungs.position, position) : and(lt(rungs.position, position), gt(rungs.position, 0)),
-      ),
-    )
-    .orderBy(way === "up" ? asc(rungs.position) : desc(rungs.position))
-    .limit(1);
-  return row ?? null;
-}
-
-/**
- * A prerequisite is reached when the athlete stands on that rung or a later one of its ladder, or
- * has achieved that ladder's skill.
- */
-async function prerequisitesOf(q: Queryable, rungId: string, athleteId: string): Promise<PrerequisiteState[]> {
-  const required = alias(rungs, "required_rung");
-  const standing = alias(rungs, "standing_rung");
-  const rows = await q
-    .select({
-      rungId: required.id,
-      rungName: required.name,
-      ladderName: ladders.name,
-      reached: sql<boolean>`coalesce(${athletePositions.achievedAt} is not null or ${standing.position} >= ${required.position}, false)`,
-    })
-    .from(rungPrerequisites)
-    .innerJoin(required, eq(required.id, rungPrerequisites.requiresRungId))
-    .innerJoin(ladders, eq(ladders.id, required.ladderId))
-    .leftJoin(athletePositions, and(eq(athletePositions.athleteId, athleteId), eq(athletePositions.ladderId, required.ladderId)))
-    .leftJoin(standing, eq(standing.id, athletePositions.rungId))
-    .where(eq(rungPrerequisites.rungId, rungId))
-    .orderBy(asc(ladders.name), asc(required.position));
-  return rows.map((r) => ({ ...r, reached: r.reached === true }));
 }

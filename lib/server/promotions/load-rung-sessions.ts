@@ -32,6 +32,9 @@ export async function loadRungSessions(q: Queryable, query: RungSessionsQuery): 
         isNull(logs.deletedAt),
       ),
     )
-    .orderBy(asc(logEntries.performedOn), asc(logEntries.createdAt));
+    .orderBy(asc(logEntries.performedOn), asc(logEntries.createdAt))
+    // A named statement (one per shape): planned once per connection, run on every log.
+    .prepare(query.until ? "rung_sessions_until" : "rung_sessions")
+    .execute();
   return mergeSessions(rows.map((row) => ({ date: row.date, sets: row.sets, pain: row.pain })));
 }
