@@ -1,7 +1,7 @@
 #!/usr/bin/env node
 // `npm run bench`: benchmarks against a production build on loopback, in one run. Starts its own
 // PostgreSQL cluster and `next start`, seeds its own data, prints a table per bench and writes
-// scripts/bench/results/<bench>-<time>.json. Options: --only=log, --seconds=20, --skip-build.
+// scripts/bench/results/<bench>-<time>.json. Options: --only=log,promotion, --seconds=20, --skip-build.
 // Later issues add a file per bench and one line to BENCHES.
 import { spawnSync } from "node:child_process";
 import fs from "node:fs";
@@ -9,9 +9,10 @@ import path from "node:path";
 import { fileURLToPath } from "node:url";
 import { build, freePort, migrate, secret, shutdown, startApp, startPostgres } from "./environment.mjs";
 import { logBench } from "./log-bench.mjs";
+import { promotionBench } from "./promotion-bench.mjs";
 import { printTable } from "./stats.mjs";
 
-const BENCHES = { log: logBench };
+const BENCHES = { log: logBench, promotion: promotionBench };
 /** Benches that run as their own process against this run's database (they print their own tables). */
 const STANDALONE = {
   engine: ["tsx", ["scripts/bench/engine.ts"]],

@@ -4,45 +4,17 @@ import crypto from "node:crypto";
 import autocannon from "autocannon";
 import pg from "pg";
 import { percentiles, round } from "./stats.mjs";
+import { createBenchTeam, placeAthletes, starterRung } from "./world.mjs";
 
 const ATHLETES = 50;
 const FLOOR_DATE = "2000-01-01"; // floor rows are told apart by date and removed afterwards
 
-/** A team (through the API, so it gets the starter library), 50 athletes on one rung, a token. */
+/** A team, 50 athletes on one rung whose standard one post never meets, a token. */
 async function seed(baseUrl, dbUrl) {
-  const email = `bench-${crypto.randomUUID().slice(0, 8)}@bench.test`;
-  const signup = await fetch(`${baseUrl}/api/v1/signup`, {
-    method: "POST",
-    headers: { "content-type": "application/json" },
-    body: JSON.stringify({ email, password: "bench-password-123", name: "Bench Owner", teamName: "Bench Club", timeZone: "Europe/Amsterdam" }),
-  });
-  if (signup.status !== 201) throw new Error(`sign-up failed: ${signup.status} ${await signup.text()}`);
-  const client = new pg.Client({ connectionString: dbUrl });
-  await client.connect();
-  try {
-    const { rows: [owner] } = await client.query("select id, team_id from users where email = $1", [email]);
-    const token = `rw_${crypto.randomBytes(32).toString("base64url")}`;
-    await client.query("insert into api_tokens (team_id, user_id, name, token_hash, prefix) values ($1, $2, 'bench', $3, $4)", [
-      owner.team_id, owner.id, crypto.createHash("sha256").update(token).digest("hex"), token.slice(0, 10),
-    ]);
-    const { rows: [rung] } = await client.query(
-      `select r.id, r.ladder_id from rungs r join ladders l on l.id = r.ladder_id
-        where r.team_id = $1 and l.starter_key = 'freestanding-handstand' and r.starter_key = 'chest-to-wall-hold'`,
-      [owner.team_id],
-    );
-    const athleteIds = [];
-    for (let i = 0; i < ATHLETES; i += 1) {
-      const { rows: [a] } = await client.query("insert into athletes (team_id, name) values ($1, $2) returning id", [owner.team_id, `Bench Athlete ${i + 1}`]);
-      await client.query(
-        "insert into athlete_positions (team_id, athlete_id, ladder_id, rung_id, since) values ($1, $2, $3, $4, '2020-01-01')",
-        [owner.team_id, a.id, rung.ladder_id, rung.id],
-      );
-      athleteIds.push(a.id);
-    }
-    return { teamId: owner.team_id, ownerId: owner.id, token, rungId: rung.id, athleteIds };
-  } finally {
-    await client.end();
-  }
+  const team = await createBenchTeam(baseUrl, dbUrl);
+  const rung = await starterRung(dbUrl, team.teamId, "freestanding-handstand", "chest-to-wall-hold");
+  const athleteIds = await placeAthletes(dbUrl, team.teamId, rung, ATHLETES, "Bench Athlete");
+  return { ...team, rungId: rung.id, athleteIds };
 }
 
 /** (1) The floor: single-row INSERTs into logs through pg, 50 clients, for `seconds`. */
