@@ -18,6 +18,8 @@ const CONCURRENCY = Number(process.env.WORKER_CONCURRENCY ?? 16);
 process.env.DATABASE_POOL_SIZE ??= String(CONCURRENCY + 8);
 let stopping = false;
 let wake: (() => void) | null = null;
+/** The scheduler tick in progress, awaited on shutdown before the database pool closes. */
+let ticking: Promise<unknown> = Promise.resolve();
 
 function log(message: string) {
   console.log(`[worker] ${new Date().toISOString()} ${message}`);
@@ -26,7 +28,7 @@ function log(message: string) {
 async function tick() {
   const now = new Date();
   const digests = await enqueueDueDigests(now);
-  const days = await runDailyEvaluations(now);
+  const days = await runDailyEvaluations(now, () => stopping);
   if (digests || days.length) log(`scheduler: ${digests} digests queued, ${days.length} teams re-evaluated`);
   // Form-check files: give up unfinished uploads, then remove queued objects (failures retry with backoff).
   const abandoned = await sweepAbandonedUploads(now);
@@ -61,7 +63,11 @@ async function main() {
   const boss = await getBoss({ full: true });
   // Every 10 minutes; pg-boss runs one tick per schedule across all worker instances.
   await boss.schedule(SCHEDULER_QUEUE, "*/10 * * * *");
-  await boss.work(SCHEDULER_QUEUE, async () => tick());
+  await boss.work(SCHEDULER_QUEUE, async () => {
+    const run = tick();
+    ticking = run.catch(() => undefined);
+    await run;
+  });
   await boss.send(SCHEDULER_QUEUE, {}, { singletonKey: "startup", singletonSeconds: 60 });
   log("ready");
   const loop = mailLoop();
@@ -72,6 +78,7 @@ async function main() {
     log(`${signal}: finishing the current batch`);
     wake?.();
     await loop;
+    await ticking;
     await stopBoss();
     await closeDb();
     log("stopped");

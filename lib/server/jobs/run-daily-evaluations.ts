@@ -51,11 +51,16 @@ export async function runDailyEvaluation(teamId: string, now: Date): Promise<Dai
   });
 }
 
-/** The scheduler tick: every team whose local date has no evaluation yet. */
-export async function runDailyEvaluations(now: Date): Promise<DailyResult[]> {
+/**
+ * The scheduler tick: every team whose local date has no evaluation yet. `shouldStop` is asked
+ * between teams, so a worker shutting down finishes the team at hand and leaves the rest to the
+ * next tick (each team's day is claimed in its own transaction, so nothing is done twice).
+ */
+export async function runDailyEvaluations(now: Date, shouldStop: () => boolean = () => false): Promise<DailyResult[]> {
   const all = await db.select({ id: teams.id }).from(teams);
   const results: DailyResult[] = [];
   for (const team of all) {
+    if (shouldStop()) break;
     const result = await runDailyEvaluation(team.id, now);
     if (result) results.push(result);
   }
