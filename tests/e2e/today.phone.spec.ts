@@ -102,4 +102,13 @@ test("an athlete logs sets with the timer, keeps logging offline through a reloa
 
   const after = setsOn(await today(page), hold.rungId);
   expect(after).toEqual({ entries: start.entries + 5, sets: start.sets + 5 });
+
+  // Signing out drops the personal pages kept for offline use (a shared phone shows them to nobody).
+  await page.getByRole("button", { name: "Sign out" }).click();
+  await expect(page).toHaveURL(/\/sign-in/);
+  const kept = await page.evaluate(async () => ({
+    pageCaches: (await caches.keys()).filter((k) => k.startsWith("rungwise-pages-")).length,
+    today: Boolean(await caches.match("/today")),
+  }));
+  expect(kept).toEqual({ pageCaches: 0, today: false });
 });
