@@ -78,6 +78,12 @@ export class TooManyRequests extends AppError {
   }
 }
 
+/** A service we depend on (the payment provider) did not answer: nothing was changed, retry later. */
+export class ServiceUnavailable extends AppError {
+  readonly status = 503;
+  readonly code = "service_unavailable";
+}
+
 /** A single-field validation failure, for rules zod cannot see (uniqueness, cross-row checks). */
 export function invalidField(path: string, message: string): Unprocessable {
   return new Unprocessable(message, [{ path, message }]);

@@ -21,6 +21,7 @@ const ERROR_TEXT: Record<number, string> = {
   415: "Unsupported media type",
   422: "Validation failed; `issues` names each field",
   429: "Rate limited; see Retry-After",
+  503: "The payment provider did not answer; nothing changed, retry later",
 };
 
 /** A list response in the API's one shape. */

@@ -1,3 +1,4 @@
+import { createServer, type AddressInfo } from "node:net";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { GET as getMembership, PATCH as patchMembership } from "@/app/api/v1/billing/membership/route";
 import { GET as getRevenue } from "@/app/api/v1/billing/revenue/route";
@@ -138,4 +139,31 @@ describe("checkout through the SDK and the fake", () => {
     expect(fake.outbox.length).toBe(from);
     expect((await membershipRow(athlete.athleteId!))?.status).toBe("pending");
   });
+
+  it("answers 503 and stores nothing when the provider does not answer", async () => {
+    const { ownerToken, athleteToken, athlete } = await teamWithAthlete();
+    const offerId = await createOffer(ownerToken);
+    const port = process.env.PAYMENTS_API_PORT;
+    // A port nobody listens on: the SDK's connection is refused, as in a provider outage.
+    process.env.PAYMENTS_API_PORT = String(await closedPort());
+    try {
+      const res = await call(checkout, { token: athleteToken, method: "POST", params: { id: offerId } });
+      expect(res.status).toBe(503);
+      expect(res.data.error?.code).toBe("service_unavailable");
+    } finally {
+      process.env.PAYMENTS_API_PORT = port;
+    }
+    expect(await membershipRow(athlete.athleteId!)).toBeUndefined();
+  });
 });
+
+function closedPort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const server = createServer();
+    server.on("error", reject);
+    server.listen(0, "127.0.0.1", () => {
+      const { port } = server.address() as AddressInfo;
+      server.close(() => resolve(port));
+    });
+  });
+}

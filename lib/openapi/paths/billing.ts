@@ -39,10 +39,10 @@ export function registerBillingPaths(registry: OpenAPIRegistry): void {
     method: "post",
     path: "/api/v1/offers/{id}/checkout",
     tag,
-    summary: "Start the provider's hosted checkout for the signed-in athlete; 404 for another team's offer, 409 when already active",
+    summary: "Start the provider's hosted checkout for the signed-in athlete; 404 for another team's offer, 409 when already active, 503 when the provider does not answer",
     params: zIdParam,
     ok: { status: 200, schema: ZCheckout },
-    errors: [404, 409],
+    errors: [404, 409, 503],
   });
   defineOperation(registry, {
     method: "get",
@@ -66,9 +66,9 @@ export function registerBillingPaths(registry: OpenAPIRegistry): void {
     method: "patch",
     path: "/api/v1/billing/membership",
     tag,
-    summary: "Cancel at the end of the paid period, or take the cancellation back (athlete)",
+    summary: "Cancel at the end of the paid period, or take the cancellation back (athlete); 503 when the provider does not answer",
     body: ZMembershipPatch,
     ok: { status: 200, schema: ZMembership },
-    errors: [404, 409],
+    errors: [404, 409, 503],
   });
 }

@@ -5,7 +5,7 @@ import { db } from "@/db/client";
 import { billingEvents, billingPayments, billingSubscriptions } from "@/db/schema";
 import { BadRequest } from "@/lib/errors";
 import { applyProviderSubscription } from "./apply-provider-subscription";
-import { paymentsClient } from "./payments-client";
+import { callProvider, paymentsClient } from "./payments-client";
 import { paymentsConfig } from "./payments-config";
 
 /** The provider's documented default: signatures older than five minutes are refused. */
@@ -24,7 +24,7 @@ const idOf = (value: string | { id: string } | null | undefined) => (typeof valu
 async function subscriptionIdOf(stripe: Stripe, event: Stripe.Event): Promise<string | null> {
   const object = event.data.object as { object?: string; id?: string };
   if (event.type === "checkout.session.completed") {
-    const session = await stripe.checkout.sessions.retrieve(event.data.object.id);
+    const session = await callProvider(() => stripe.checkout.sessions.retrieve(event.data.object.id));
     return idOf(session.subscription);
   }
   if (event.type === "invoice.paid" || event.type === "invoice.payment_failed") {
@@ -66,7 +66,7 @@ export async function handlePaymentWebhook(rawBody: string, signature: string | 
   if (seen) return { received: true, duplicate: true };
 
   const subscriptionId = HANDLED.has(event.type) ? await notFoundAsNull(subscriptionIdOf(stripe, event)) : null;
-  const subscription = subscriptionId ? await notFoundAsNull(stripe.subscriptions.retrieve(subscriptionId)) : null;
+  const subscription = subscriptionId ? await notFoundAsNull(callProvider(() => stripe.subscriptions.retrieve(subscriptionId))) : null;
 
   return db.transaction(async (tx) => {
     const [fresh] = await tx.insert(billingEvents).values({ eventId: event.id, type: event.type }).onConflictDoNothing().returning({ id: billingEvents.eventId });

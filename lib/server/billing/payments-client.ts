@@ -1,6 +1,6 @@
 import "server-only";
 import Stripe from "stripe";
-import { Conflict } from "@/lib/errors";
+import { Conflict, ServiceUnavailable } from "@/lib/errors";
 import { paymentsConfig, type PaymentsConfig } from "./payments-config";
 
 /** Pinned with the `stripe` package (23.1.0): objects are read in this version's shape. */
@@ -28,4 +28,24 @@ export function paymentsClient(): Stripe {
   const config = paymentsConfig();
   if (!config) throw new Conflict("Payments are not set up on this server.");
   return clientFor(config);
+}
+
+/**
+ * Runs a call to the provider, turning an outage (no connection, its own server error, rate limit)
+ * into a 503 the caller can retry, instead of an unexplained 500. Other provider errors are our
+ * bugs and stay errors.
+ */
+export async function callProvider<T>(call: () => Promise<T>): Promise<T> {
+  try {
+    return await call();
+  } catch (error) {
+    if (
+      error instanceof Stripe.errors.StripeConnectionError ||
+      error instanceof Stripe.errors.StripeAPIError ||
+      error instanceof Stripe.errors.StripeRateLimitError
+    ) {
+      throw new ServiceUnavailable("The payment provider did not answer. Nothing was charged or changed; try again in a minute.");
+    }
+    throw error;
+  }
 }

@@ -6,7 +6,7 @@ import { Conflict, Forbidden, NotFound } from "@/lib/errors";
 import type { Actor } from "@/lib/server/actor";
 import { applyProviderSubscription } from "./apply-provider-subscription";
 import { getMembership } from "./get-membership";
-import { paymentsClient } from "./payments-client";
+import { callProvider, paymentsClient } from "./payments-client";
 
 /**
  * The athlete cancels at the end of the paid period (or takes that back). The provider is told
@@ -20,7 +20,8 @@ export async function setCancelAtPeriodEnd(actor: Actor, cancelAtPeriodEnd: bool
     .where(and(eq(billingSubscriptions.teamId, actor.teamId), eq(billingSubscriptions.athleteId, actor.athleteId)));
   if (!row?.providerSubscriptionId) throw new NotFound("membership");
   if (row.status === "cancelled") throw new Conflict("This membership has already ended.");
-  const sub = await paymentsClient().subscriptions.update(row.providerSubscriptionId, { cancel_at_period_end: cancelAtPeriodEnd });
+  const subscriptionId = row.providerSubscriptionId;
+  const sub = await callProvider(() => paymentsClient().subscriptions.update(subscriptionId, { cancel_at_period_end: cancelAtPeriodEnd }));
   await db.transaction((tx) => applyProviderSubscription(tx, sub));
   return getMembership(actor);
 }

@@ -5,7 +5,7 @@ import { athletes, billingOffers, billingSubscriptions } from "@/db/schema";
 import { env } from "@/lib/env";
 import { Conflict, Forbidden, NotFound } from "@/lib/errors";
 import type { Actor } from "@/lib/server/actor";
-import { paymentsClient } from "./payments-client";
+import { callProvider, paymentsClient } from "./payments-client";
 
 /**
  * Starts the provider's hosted checkout for the signed-in athlete and one offer of their team. The
@@ -35,9 +35,13 @@ export async function startCheckout(actor: Actor, offerId: string): Promise<{ ur
   const metadata = { teamId: actor.teamId, athleteId: athlete.id, offerId: offer.id };
   const customerId =
     existing?.customerId ??
-    (await stripe.customers.create({ email: athlete.email ?? actor.email, name: athlete.name, metadata: { teamId: actor.teamId, athleteId: athlete.id } })).id;
+    (
+      await callProvider(() =>
+        stripe.customers.create({ email: athlete.email ?? actor.email, name: athlete.name, metadata: { teamId: actor.teamId, athleteId: athlete.id } }),
+      )
+    ).id;
   const appUrl = env().APP_URL.replace(/\/$/, "");
-  const session = await stripe.checkout.sessions.create({
+  const session = await callProvider(() => stripe.checkout.sessions.create({
     mode: "subscription",
     customer: customerId,
     client_reference_id: athlete.id,
@@ -56,7 +60,7 @@ export async function startCheckout(actor: Actor, offerId: string): Promise<{ ur
     ],
     success_url: `${appUrl}/billing?checkout={CHECKOUT_SESSION_ID}`,
     cancel_url: `${appUrl}/billing?checkout=cancelled`,
-  });
+  }));
   if (!session.url) throw new Conflict("The payment provider returned no checkout page.");
 
   await db
