@@ -242,6 +242,10 @@ ${done ? `<p>This checkout is ${escapeHtml(session.status)}.</p>` : `<form metho
       const sub = subscriptions.get(parts[2]);
       if (!sub) return notFound(res, `subscription: '${parts[2]}'`);
       if (method === "GET") return send(res, 200, sub);
+      if (method === "DELETE") {
+        if (sub.status !== "canceled") await end(sub);
+        return send(res, 200, sub);
+      }
       if (method === "POST") {
         if (body.cancel_at_period_end !== undefined) {
           sub.cancel_at_period_end = body.cancel_at_period_end === "true";

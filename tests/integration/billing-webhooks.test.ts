@@ -25,10 +25,11 @@ async function paidCheckout() {
   const ownerToken = await bearerFor(team.owner);
   const athlete = await createMember(team.teamId, "athlete", "Ines Moreau");
   const offerId = await createOffer(ownerToken, { priceMinor: 3000, currency: "GBP" });
-  const res = await call(checkout, { token: await bearerFor(athlete.actor), method: "POST", params: { id: offerId } });
+  const athleteToken = await bearerFor(athlete.actor);
+  const res = await call(checkout, { token: athleteToken, method: "POST", params: { id: offerId } });
   const from = fake.outbox.length;
   await clickOnCheckout(res.data.url as string, "pay");
-  return { athleteId: athlete.actor.athleteId!, deliveries: fake.outbox.slice(from), from, teamId: team.teamId };
+  return { athleteId: athlete.actor.athleteId!, athleteToken, offerId, deliveries: fake.outbox.slice(from), from, teamId: team.teamId };
 }
 
 describe("webhook signatures", () => {
@@ -117,5 +118,32 @@ describe("events about unknown objects", () => {
     const res = await deliver({ payload, header: sdk.webhooks.generateTestHeaderString({ payload, secret: TEST_WEBHOOK_SECRET }) });
     expect(res.status).toBe(200);
     expect(res.data.duplicate).toBe(false);
+  });
+});
+
+describe("paying again after a failed renewal", () => {
+  it("ends the lapsed subscription at the provider once the new one is paid, so nobody pays twice", async () => {
+    const first = await paidCheckout();
+    await deliverFrom(fake, first.from);
+    const oldSub = (await membershipRow(first.athleteId))!.providerSubscriptionId!;
+    const lapseFrom = fake.outbox.length;
+    await fetch(`${fake.url}/_fake/subscriptions/${oldSub}/renew?outcome=fail`, { method: "POST" });
+    await deliverFrom(fake, lapseFrom);
+    expect((await membershipRow(first.athleteId))?.status).toBe("past_due");
+
+    // The athlete checks out again with a working card.
+    const res = await call(checkout, { token: first.athleteToken, method: "POST", params: { id: first.offerId } });
+    expect(res.status).toBe(200);
+    const payFrom = fake.outbox.length;
+    await clickOnCheckout(res.data.url as string, "pay");
+    await deliverFrom(fake, payFrom);
+
+    const row = await membershipRow(first.athleteId);
+    expect(row?.status).toBe("active");
+    expect(row?.providerSubscriptionId).not.toBe(oldSub);
+    expect(fake.subscriptions.get(oldSub)?.status).toBe("canceled");
+    // The provider's "deleted" event about the old subscription does not touch the new membership.
+    await deliverFrom(fake, payFrom);
+    expect(await membershipRow(first.athleteId)).toEqual(row);
   });
 });

@@ -31,12 +31,22 @@ export function periodEndOf(sub: Stripe.Subscription): Date | null {
 
 const idOf = (value: string | { id: string } | null | undefined) => (typeof value === "string" ? value : (value?.id ?? null));
 
+export interface AppliedSubscription {
+  /** The athlete's membership row. */
+  id: string;
+  /**
+   * The provider subscription this one replaced while it was still billing (a lapsed athlete paid
+   * through a new checkout): the caller ends it at the provider so nobody pays twice.
+   */
+  replaced: string | null;
+}
+
 /**
  * Writes the provider's current view of a subscription onto the athlete's membership row. Called
- * with a freshly fetched object, so the order events arrive in does not matter. Returns the row id,
- * or null when the subscription is not one of ours.
+ * with a freshly fetched object, so the order events arrive in does not matter. Returns null when
+ * the subscription is not one of ours.
  */
-export async function applyProviderSubscription(tx: Tx, sub: Stripe.Subscription, now = new Date()): Promise<string | null> {
+export async function applyProviderSubscription(tx: Tx, sub: Stripe.Subscription, now = new Date()): Promise<AppliedSubscription | null> {
   const meta = sub.metadata ?? {};
   let [row] = await tx
     .select({ id: billingSubscriptions.id, lapsedAt: billingSubscriptions.lapsedAt, providerSubscriptionId: billingSubscriptions.providerSubscriptionId, status: billingSubscriptions.status })
@@ -55,7 +65,9 @@ export async function applyProviderSubscription(tx: Tx, sub: Stripe.Subscription
 
   const status = statusOf(sub.status);
   // A late event about an older, ended subscription must not overwrite the athlete's newer one.
-  if (row.providerSubscriptionId && row.providerSubscriptionId !== sub.id && status !== "active" && status !== "past_due") return row.id;
+  const isNewer = Boolean(row.providerSubscriptionId) && row.providerSubscriptionId !== sub.id;
+  if (isNewer && status !== "active" && status !== "past_due") return { id: row.id, replaced: null };
+  const replaced = isNewer && status === "active" && row.status === "past_due" ? row.providerSubscriptionId : null;
 
   let offerId: string | undefined;
   if (meta.offerId && meta.teamId) {
@@ -77,5 +89,5 @@ export async function applyProviderSubscription(tx: Tx, sub: Stripe.Subscription
       lapsedAt: status === "active" ? null : (row.lapsedAt ?? (status === "pending" ? null : now)),
     })
     .where(eq(billingSubscriptions.id, row.id));
-  return row.id;
+  return { id: row.id, replaced };
 }

@@ -35,7 +35,7 @@ async function subscriptionIdOf(stripe: Stripe, event: Stripe.Event): Promise<st
 
 /**
  * An object the provider no longer knows is nothing to apply (the event is recorded and ignored);
- * any other failure propagates, the answer is 500 and the provider retries later.
+ * any other failure propagates, the answer is 5xx and the provider retries later.
  */
 async function notFoundAsNull<T>(request: Promise<T>): Promise<T | null> {
   try {
@@ -68,10 +68,11 @@ export async function handlePaymentWebhook(rawBody: string, signature: string | 
   const subscriptionId = HANDLED.has(event.type) ? await notFoundAsNull(subscriptionIdOf(stripe, event)) : null;
   const subscription = subscriptionId ? await notFoundAsNull(callProvider(() => stripe.subscriptions.retrieve(subscriptionId))) : null;
 
-  return db.transaction(async (tx) => {
+  const outcome = await db.transaction(async (tx) => {
     const [fresh] = await tx.insert(billingEvents).values({ eventId: event.id, type: event.type }).onConflictDoNothing().returning({ id: billingEvents.eventId });
-    if (!fresh) return { received: true, duplicate: true };
-    const rowId = subscription ? await applyProviderSubscription(tx, subscription) : null;
+    if (!fresh) return { duplicate: true, replaced: null };
+    const applied = subscription ? await applyProviderSubscription(tx, subscription) : null;
+    const rowId = applied?.id ?? null;
     if (event.type === "invoice.paid" && rowId) {
       const invoice = event.data.object;
       const [row] = await tx.select({ teamId: billingSubscriptions.teamId }).from(billingSubscriptions).where(eq(billingSubscriptions.id, rowId));
@@ -83,6 +84,20 @@ export async function handlePaymentWebhook(rawBody: string, signature: string | 
           .onConflictDoNothing();
       }
     }
-    return { received: true, duplicate: false };
+    return { duplicate: false, replaced: applied?.replaced ?? null };
   });
+  if (outcome.replaced) await endReplacedSubscription(stripe, outcome.replaced);
+  return { received: true, duplicate: outcome.duplicate };
+}
+
+/**
+ * Ends the lapsed subscription a new checkout replaced. Best effort after the commit: if the
+ * provider is down, its own retries of the failed renewal end the old one in time; we say so.
+ */
+async function endReplacedSubscription(stripe: Stripe, subscriptionId: string): Promise<void> {
+  try {
+    await callProvider(() => stripe.subscriptions.cancel(subscriptionId));
+  } catch (error) {
+    console.warn(`[billing] could not end replaced subscription ${subscriptionId}:`, error instanceof Error ? error.message : error);
+  }
 }
