@@ -10,21 +10,31 @@ export interface NavItem {
   roles: readonly Role[];
   /** Short label for the phone tab bar. */
   short?: string;
+  /** Coach navigation is grouped by the kind of work, so a dozen entries still read at a glance. */
+  group?: NavGroup;
 }
 
+export type NavGroup = "week" | "build" | "club";
+
+export const NAV_GROUP_LABELS: Record<NavGroup, string> = {
+  week: "This week's work",
+  build: "Build training",
+  club: "Run the club",
+};
+
 export const COACH_NAV: readonly NavItem[] = [
-  { href: "/coach/readiness", label: "This week", roles: ["owner", "coach"] },
-  { href: "/coach/athletes", label: "Athletes", roles: ["owner", "coach"] },
-  { href: "/coach/form-checks", label: "Form checks", roles: ["owner", "coach"] },
-  { href: "/coach/approvals", label: "Approvals", roles: ["owner", "coach"] },
-  { href: "/coach/ladders", label: "Ladders", roles: ["owner", "coach"] },
-  { href: "/coach/squads", label: "Squads", roles: ["owner", "coach"] },
-  { href: "/coach/blocks", label: "Blocks", roles: ["owner", "coach"] },
-  { href: "/coach/plans", label: "Plans", roles: ["owner", "coach"] },
-  { href: "/coach/team", label: "Team", roles: ["owner", "coach"] },
-  { href: "/settings", label: "Settings", roles: ["owner", "coach"] },
-  { href: "/coach/admin/jobs", label: "Mail jobs", roles: ["owner"] },
-  { href: "/coach/billing", label: "Billing", roles: ["owner"] },
+  { href: "/coach/readiness", label: "This week", roles: ["owner", "coach"], group: "week" },
+  { href: "/coach/athletes", label: "Athletes", roles: ["owner", "coach"], group: "week" },
+  { href: "/coach/form-checks", label: "Form checks", roles: ["owner", "coach"], group: "week" },
+  { href: "/coach/approvals", label: "Approvals", roles: ["owner", "coach"], group: "week" },
+  { href: "/coach/ladders", label: "Ladders", roles: ["owner", "coach"], group: "build" },
+  { href: "/coach/squads", label: "Squads", roles: ["owner", "coach"], group: "build" },
+  { href: "/coach/blocks", label: "Blocks", roles: ["owner", "coach"], group: "build" },
+  { href: "/coach/plans", label: "Plans", roles: ["owner", "coach"], group: "build" },
+  { href: "/coach/team", label: "Team", roles: ["owner", "coach"], group: "club" },
+  { href: "/settings", label: "Settings", roles: ["owner", "coach"], group: "club" },
+  { href: "/coach/admin/jobs", label: "Mail jobs", roles: ["owner"], group: "club" },
+  { href: "/coach/billing", label: "Billing", roles: ["owner"], group: "club" },
 ];
 
 export const ATHLETE_NAV: readonly NavItem[] = [

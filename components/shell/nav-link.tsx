@@ -13,7 +13,7 @@ export function NavLink({ href, children, variant = "top" }: { href: string; chi
       aria-current={active ? "page" : undefined}
       className={cn(
         variant === "top"
-          ? "rounded-md px-3 py-2 text-sm font-semibold"
+          ? "whitespace-nowrap rounded-md px-3 py-2 text-sm font-semibold"
           : "flex min-h-14 flex-1 flex-col items-center justify-center text-sm font-semibold",
         active ? "bg-moss-soft text-moss-strong" : "text-muted hover:text-ink",
       )}
