@@ -1,5 +1,7 @@
 import { z } from "zod";
+import type { Measure } from "@/lib/engine";
 import { zDate, zId } from "./common";
+import { standardIssues, ZStandardInput } from "./ladders";
 
 const whole = (min: number, max: number, what: string) =>
   z.number({ error: `Enter ${what}.` }).int("Use a whole number.").min(min, `At least ${min}.`).max(max, `At most ${max}.`);
@@ -32,6 +34,18 @@ export const ZBacktestStandard = z
     message: "Can't need more sessions than the window looks at.",
   });
 export type BacktestStandard = z.output<typeof ZBacktestStandard>;
+
+/**
+ * The standard a rung form holds, ready to replay, or null while the form would refuse it. The
+ * form's rules decide (they are stricter, with per-measure limits), so the replay never shows a
+ * standard that could not be saved; the backtest schema then shapes the request body.
+ */
+export function replayableStandard(measure: Measure, typed: unknown): BacktestStandard | null {
+  const asForm = ZStandardInput.safeParse(typed);
+  if (!asForm.success || standardIssues(measure, asForm.data).length > 0) return null;
+  const asRequest = ZBacktestStandard.safeParse(asForm.data);
+  return asRequest.success ? asRequest.data : null;
+}
 
 export const ZBacktestRequest = z.strictObject({ rungId: zId, standard: ZBacktestStandard });
 export type BacktestRequest = z.input<typeof ZBacktestRequest>;
