@@ -13,6 +13,7 @@ import { defaultStandard, MEASURES, RUNG_TAGS, type Measure } from "@/lib/engine
 import { MEASURE_LABELS, ZRungInput, type RungDto } from "@/lib/validation/ladders";
 import { PrerequisitePicker, type PickedRung } from "./prerequisite-picker";
 import { StandardFields } from "./standard-fields";
+import { StandardReplay } from "./standard-replay";
 import { useLadderRefresh } from "./use-ladder";
 
 type FormIn = z.input<typeof ZRungInput>;
@@ -119,7 +120,17 @@ export function RungForm({ ladderId, rung, onDone }: { ladderId: string; rung?: 
         </div>
         {errors.tags ? <p className="text-sm text-danger">{errors.tags.message}</p> : null}
       </fieldset>
-      <StandardFields form={form} measure={measure} idBase={idBase} />
+      {rung ? (
+        <div className="grid gap-4 xl:grid-cols-[minmax(0,1fr)_minmax(0,22rem)] xl:items-start">
+          <StandardFields form={form} measure={measure} idBase={idBase} />
+          <StandardReplay control={form.control} ladderId={ladderId} rungId={rung.id} />
+        </div>
+      ) : (
+        <>
+          <StandardFields form={form} measure={measure} idBase={idBase} />
+          <p className="text-xs text-muted">Once the rung is saved, editing it replays past sessions under the standard you type.</p>
+        </>
+      )}
       <PrerequisitePicker ladderId={ladderId} value={picked} onChange={setPrerequisites} error={errors.prerequisites?.message ?? errors.prerequisites?.[0]?.message} />
       <div className="flex gap-2">
         <Button type="submit" disabled={save.isPending}>
