@@ -67,13 +67,15 @@ export function CompactBacktestTable({ items }: { items: BacktestItem[] }) {
             <td className="py-2 pr-3">
               <span className="block font-semibold">{item.athleteName}</span>
               <span className="block text-xs text-muted">
-                on it from <span className="font-mono">{item.reachedOn}</span>
+                on it from <span className="whitespace-nowrap font-mono">{item.reachedOn}</span>
               </span>
             </td>
-            <td className="py-2 pr-3 font-mono">{item.actualPromotedOn ?? "—"}</td>
+            <td className="whitespace-nowrap py-2 pr-3 font-mono">{item.actualPromotedOn ?? "—"}</td>
             <td className="py-2">
-              <span className="block font-mono">{item.wouldPromoteOn ?? "never, so far"}</span>
-              <Difference actual={item.actualPromotedOn} would={item.wouldPromoteOn} />
+              <span className="block whitespace-nowrap font-mono">{item.wouldPromoteOn ?? "never, so far"}</span>
+              <span className="block whitespace-nowrap">
+                <Difference actual={item.actualPromotedOn} would={item.wouldPromoteOn} />
+              </span>
             </td>
           </tr>
         ))}
