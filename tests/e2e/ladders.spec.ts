@@ -16,6 +16,14 @@ async function signUpFreshTeam(page: Page) {
   await expect(page.getByRole("heading", { name: "Athletes" })).toBeVisible();
 }
 
+async function signInAsDemoCoach(page: Page) {
+  await page.goto("/sign-in");
+  await page.getByLabel("E-mail").fill("coach@rungwise.test");
+  await page.getByLabel("Password").fill("rungwise-demo");
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await expect(page).toHaveURL(/\/coach/);
+}
+
 async function addRung(page: Page, name: string, numbers: { target?: string; sets?: string } = {}) {
   await page.getByRole("button", { name: "Add rung" }).first().click();
   const form = page.getByRole("form", { name: "New rung" });
@@ -57,6 +65,9 @@ test("a coach builds a ladder, reorders it, exports it, imports a copy and place
   await page.getByRole("button", { name: "Add rung" }).first().click();
   const first = page.getByRole("form", { name: "New rung" });
   await first.getByLabel("Rung name").fill("Frog stand");
+  // A rung not saved yet has no past sessions to replay: a note, no table.
+  await expect(first.getByText("Once the rung is saved, editing it replays past sessions")).toBeVisible();
+  await expect(first.getByRole("region", { name: "Past sessions under this standard" })).toHaveCount(0);
   await expect(first.getByTestId("standard-preview")).toContainText(
     "3 sets of at least 20 s at RPE 7 or easier, in 2 of the last 3 sessions, at least 7 days on this rung, pain-free",
   );
@@ -114,4 +125,54 @@ test("a coach builds a ladder, reorders it, exports it, imports a copy and place
   await placement.getByRole("button", { name: "Place athlete" }).click();
   await expect(page.getByText("Placed on Planche line: Tuck planche.")).toBeVisible();
   await expect(placement.getByText(/Rung 1: Tuck planche · since \d{4}-\d{2}-\d{2}/)).toBeVisible();
+});
+
+// Read-only over the demo club: the form is cancelled, so the seeded standard stays as other specs expect.
+test("editing a rung with history replays the standard as typed beside its fields", async ({ page }) => {
+  await signInAsDemoCoach(page);
+  await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Ladders" }).click();
+  await page.getByRole("link", { name: /^Press to handstand/ }).click();
+  await expect(page.getByRole("heading", { name: "Press to handstand" })).toBeVisible();
+
+  const rungName = "Straddle leg lifts, hands in front";
+  await page.getByRole("listitem", { name: new RegExp(`^Rung \\d+: ${rungName}$`) }).getByRole("button", { name: "Edit" }).click();
+  const form = page.getByRole("form", { name: `Edit ${rungName}` });
+  const replay = form.getByRole("region", { name: "Past sessions under this standard" });
+
+  // Demo seed steps 002, 004 and 005: Ines reached this rung 16 days before the seed and has logged
+  // pain-free sessions on it since, at RPE 7 or easier, so 1 rep a set is met and 99 never is.
+  const ines = replay.getByRole("row", { name: /Ines Brodeur/ });
+  const underThisStandard = ines.getByRole("cell").nth(2);
+  await expect(ines).toBeVisible();
+
+  // Beside the standard fields on a laptop, not somewhere further down the form.
+  const fields = await form.getByRole("group", { name: "Readiness standard" }).boundingBox();
+  const table = await replay.boundingBox();
+  expect(table!.x).toBeGreaterThanOrEqual(fields!.x + fields!.width);
+  expect(table!.y).toBeLessThan(fields!.y + fields!.height);
+
+  // The numbers as typed are what gets replayed: an easy target is met on a date...
+  const target = form.getByLabel("Target (reps per set)");
+  const replayedWith = (minValue: number) =>
+    page.waitForRequest((r) => r.url().endsWith("/backtest") && (r.postDataJSON() as { standard: { minValue: number } }).standard.minValue === minValue);
+  let replayed = replayedWith(1);
+  await target.fill("1");
+  await replayed;
+  await expect(underThisStandard).toHaveText(/^\d{4}-\d{2}-\d{2}/);
+  await expect(ines).not.toContainText("Not met");
+
+  // ...and one nobody has reached is not.
+  replayed = replayedWith(99);
+  await target.fill("99");
+  await replayed;
+  await expect(underThisStandard).toHaveText(/^never, so far/);
+  await expect(ines).toContainText("Not met");
+
+  // A half-typed standard is not replayed: a note says so and the last good table stays up.
+  await target.fill("");
+  await expect(replay.getByText("Finish the standard to replay it. Until then this shows the last complete one.")).toBeVisible();
+  await expect(ines).toContainText("Not met");
+
+  await form.getByRole("button", { name: "Cancel" }).click();
+  await expect(form).toBeHidden();
 });
