@@ -58,8 +58,22 @@ async function mailLoop() {
   }
 }
 
+/**
+ * For benchmarks: every `ms`, the heap still in use after a full collection (the process must run
+ * with --expose-gc), which tells a leak from a heap the collector simply has not shrunk yet.
+ */
+function reportMemoryEvery(ms: number) {
+  const gc = (globalThis as { gc?: () => void }).gc;
+  setInterval(() => {
+    gc?.();
+    const { heapUsed, rss } = process.memoryUsage();
+    console.log(`[worker] memory retained-heap-mb=${(heapUsed / 1e6).toFixed(1)} rss-mb=${(rss / 1e6).toFixed(1)} after-gc=${Boolean(gc)}`);
+  }, ms).unref();
+}
+
 async function main() {
   env(); // fail fast on bad configuration
+  if (process.env.WORKER_MEMORY_REPORT_MS) reportMemoryEvery(Number(process.env.WORKER_MEMORY_REPORT_MS));
   const boss = await getBoss({ full: true });
   // Every 10 minutes; pg-boss runs one tick per schedule across all worker instances.
   await boss.schedule(SCHEDULER_QUEUE, "*/10 * * * *");

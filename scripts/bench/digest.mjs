@@ -2,7 +2,8 @@
 // Benchmark of the weekly digest: 1,000 coaches × 20 athletes each (bulk generate_series SQL), one
 // digest job per coach queued through the outbox, then the real worker (worker/index.ts) renders and
 // sends them all into an SMTP catcher. Prints wall time until the 1,000th delivery row and the
-// worker's peak RSS (VmHWM) sampled during the run. Goal: under 60 s, memory flat.
+// worker's peak RSS (VmHWM) sampled during the run, and the heap it keeps after a full GC (reported
+// by the worker every 2 s): flat there means no leak. Goal: under 60 s, memory flat.
 //
 // Runs alone: `node scripts/bench/digest.mjs` with BENCH_PG_ADMIN_URL (a superuser URL; a fresh
 // database is created and migrated) or DATABASE_URL (an existing migrated database; rows go to new
@@ -208,16 +209,22 @@ async function main() {
     SMTP_PORT: smtp.port,
     AUTH_SECRET: process.env.AUTH_SECRET ?? "bench-secret-bench-secret-bench-secret-0",
     APP_URL: process.env.APP_URL ?? "http://127.0.0.1:3000",
+    // The worker reports the heap it retains after a full collection: flat means no leak.
+    WORKER_MEMORY_REPORT_MS: "2000",
   };
-  const worker = spawn(process.execPath, ["--import", "tsx", "--import", serverOnlyPreload(), "worker/index.ts"], {
+  const worker = spawn(process.execPath, ["--expose-gc", "--import", "tsx", "--import", serverOnlyPreload(), "worker/index.ts"], {
     cwd: ROOT,
     env,
     stdio: ["ignore", "pipe", "inherit"],
   });
   children.push(worker);
   let ready = false;
+  let counting = false;
+  const retained = [];
   worker.stdout.on("data", (chunk) => {
-    if (String(chunk).includes("ready")) ready = true;
+    const text = String(chunk);
+    if (text.includes("ready")) ready = true;
+    for (const match of text.matchAll(/retained-heap-mb=([\d.]+)/g)) if (counting) retained.push(Number(match[1]));
   });
   await waitFor(async () => ready, 60_000, "the worker to start");
   const idleRss = peakRssMb(worker.pid);
@@ -232,6 +239,7 @@ async function main() {
   );
   const samples = [];
   let delivered = 0;
+  counting = true;
   while (delivered < COACHES) {
     await new Promise((r) => setTimeout(r, 500));
     const { rows } = await client.query(
@@ -254,6 +262,12 @@ async function main() {
   console.log(`worker CPU: ${cpu.toFixed(1)} s (${((cpu / delivered) * 1000).toFixed(1)} ms per digest); load average ${os.loadavg()[0].toFixed(1)} on ${os.cpus().length} cores`);
   console.log(
     `worker RSS: idle ${idleRss?.now.toFixed(0)} MB, peak ${final?.peak.toFixed(0)} MB; mean first third ${avg(samples.slice(0, third)).toFixed(0)} MB, last third ${avg(samples.slice(-third)).toFixed(0)} MB`,
+  );
+  // RSS drifts up while V8 lets the heap grow; what a leak would show is the heap kept after a GC.
+  const heapThird = Math.max(1, Math.floor(retained.length / 3));
+  const [early, late] = [avg(retained.slice(0, heapThird)), avg(retained.slice(-heapThird))];
+  console.log(
+    `worker heap kept after a full GC (${retained.length} samples): first third ${early.toFixed(1)} MB, last third ${late.toFixed(1)} MB; flat (< 10 % growth): ${retained.length > 2 && late < early * 1.1 ? "yes" : "NO"}`,
   );
 
   worker.kill("SIGTERM");
