@@ -8,6 +8,7 @@ import { db } from "@/db/client";
 import { ladders, rungPrerequisites, rungs, standards } from "@/db/schema";
 import { bearerFor, createMember, createTeam } from "../support/factories";
 import { call } from "../support/http";
+import { writePlacement } from "@/lib/server/positions/write-placement";
 import { ladderBody, makeLadder, rungBody } from "../support/ladder-factories";
 
 type Issue = { path: string; message: string };
@@ -123,9 +124,15 @@ describe("creating ladders", () => {
     // new teams get the six starter ladders
     expect((list.data.items as { starter: boolean }[]).filter((l) => l.starter)).toHaveLength(6);
     const token = await bearerFor(owner);
-    await makeLadder(owner, ["X"], { name: "Zeta approvals", promotionMode: "approve" });
+    const zeta = await makeLadder(owner, ["X", "Y", "Z"], { name: "Zeta approvals", promotionMode: "approve" });
+    await db.transaction((tx) =>
+      writePlacement(tx, { teamId, athleteId: actor.athleteId!, ladderId: zeta.id, rungId: zeta.rungs[1]!.id, since: "2026-01-05", actorUserId: null }),
+    );
     const approve = await call(listRoute, { token, path: "/api/v1/ladders?mode=approve&q=zeta" });
-    expect((approve.data.items as { name: string }[]).map((l) => l.name)).toEqual(["Zeta approvals"]);
+    // The list counts live rungs and placed athletes per ladder (not zero for every ladder).
+    expect((approve.data.items as { name: string; rungCount: number; athleteCount: number }[]).map((l) => [l.name, l.rungCount, l.athleteCount])).toEqual([
+      ["Zeta approvals", 3, 1],
+    ]);
     expect((await call(listRoute, { token, path: "/api/v1/ladders?mode=sometimes" })).status).toBe(422);
   });
 });

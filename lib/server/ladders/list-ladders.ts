@@ -2,7 +2,7 @@ import "server-only";
 import { and, asc, eq, gt, ilike, isNotNull, isNull, or, sql, type SQL } from "drizzle-orm";
 import type { z } from "zod";
 import { db } from "@/db/client";
-import { athletePositions, ladders, rungs } from "@/db/schema";
+import { ladders } from "@/db/schema";
 import type { Actor } from "@/lib/server/actor";
 import { decodeCursor, pageOf, zNameIdCursor } from "@/lib/server/http/cursor";
 import type { LadderSummaryDto, ZLadderListQuery } from "@/lib/validation/ladders";
@@ -27,8 +27,10 @@ export async function listLadders(actor: Actor, query: z.output<typeof ZLadderLi
       starterKey: ladders.starterKey,
       archivedAt: ladders.archivedAt,
       updatedAt: ladders.updatedAt,
-      rungCount: sql<number>`(select count(*)::int from ${rungs} where ${rungs.ladderId} = ${ladders.id} and ${rungs.archivedAt} is null)`,
-      athleteCount: sql<number>`(select count(*)::int from ${athletePositions} where ${athletePositions.ladderId} = ${ladders.id})`,
+      // Drizzle leaves columns unqualified in a one-table select, so inside a subquery "id" would
+      // mean the subquery's own table: the correlated subqueries name their tables explicitly.
+      rungCount: sql<number>`(select count(*)::int from rungs r where r.ladder_id = ladders.id and r.archived_at is null)`,
+      athleteCount: sql<number>`(select count(*)::int from athlete_positions p where p.ladder_id = ladders.id)`,
     })
     .from(ladders)
     .where(and(...filters))
