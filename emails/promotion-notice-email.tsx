@@ -1,4 +1,5 @@
 import { Button, Text } from "@react-email/components";
+import { cueLines } from "@/lib/cue-lines";
 import { EmailLayout, emailStyles } from "./layout";
 
 export interface PromotionNoticeEmailProps {
@@ -30,10 +31,14 @@ export function PromotionNoticeEmail(props: PromotionNoticeEmailProps) {
         Hi {recipientName}, {forCoach ? `${athleteName}'s` : "your"} {ladderName} ladder moved on from {fromRungName}
         {toRungName ? ` to ${toRungName}` : ""}.{explanation ? ` ${explanation}.` : ""}
       </Text>
-      {toRungName && cues ? (
+      {toRungName && cueLines(cues).length > 0 ? (
         <>
           <Text style={emailStyles.subheading}>Cues for {toRungName}</Text>
-          <Text style={emailStyles.text}>{cues}</Text>
+          {cueLines(cues).map((cue, i) => (
+            <Text key={i} style={emailStyles.text}>
+              • {cue}
+            </Text>
+          ))}
         </>
       ) : null}
       {toRungName ? (

@@ -1,6 +1,7 @@
 "use client";
 
 import { Badge, Card } from "@/components/ui/card";
+import { cueLines } from "@/lib/cue-lines";
 import type { PendingSet } from "@/lib/client/offline-queue";
 import type { TodayRung } from "@/lib/validation/logs";
 import { RestTimer } from "./rest-timer";
@@ -49,6 +50,7 @@ export function RungCard({
   onDiscard: (key: string) => void;
 }) {
   const logged = rung.logged.flatMap((entry) => entry.sets.map((set, i) => ({ key: `${entry.id}-${i}`, set, pain: entry.pain })));
+  const cues = cueLines(rung.cues);
   return (
     <Card className="flex flex-col gap-4" data-testid={`rung-${rung.rungId}`}>
       <div>
@@ -62,7 +64,13 @@ export function RungCard({
           {target ? <Badge tone="ember">Today: {target}</Badge> : null}
         </div>
       </div>
-      {rung.cues ? <p className="text-sm">{rung.cues}</p> : null}
+      {cues.length > 0 ? (
+        <ul aria-label="Cues" className="list-disc space-y-0.5 pl-5 text-sm">
+          {cues.map((cue, i) => (
+            <li key={i}>{cue}</li>
+          ))}
+        </ul>
+      ) : null}
       {rung.caution ? <p className="rounded-lg bg-ember-soft px-3 py-2 text-sm text-ember">⚠ {rung.caution}</p> : null}
       {slotNote ? <p className="text-sm text-muted">Coach: {slotNote}</p> : null}
       {rung.standardText ? (
