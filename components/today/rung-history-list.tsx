@@ -1,4 +1,5 @@
 import { Badge, Card, EmptyState } from "@/components/ui/card";
+import { calendarDayLabel } from "@/lib/calendar-day-label";
 import type { Measure, SetEntry } from "@/lib/engine/types";
 import { setText } from "./set-text";
 
@@ -25,7 +26,9 @@ export function RungHistoryList({ rungs }: { rungs: HistoryRung[] }) {
             {rung.sessions.map((session) => (
               <li key={session.date} className="flex flex-col gap-1 py-2">
                 <div className="flex items-center justify-between">
-                  <span className="font-semibold">{session.date}</span>
+                  <time dateTime={session.date} className="font-semibold">
+                    {calendarDayLabel(session.date)}
+                  </time>
                   {session.pain ? <Badge tone="danger">pain</Badge> : null}
                 </div>
                 <p className="text-sm text-muted">{session.sets.map((set) => setText(rung.measure, set)).join(" · ")}</p>
