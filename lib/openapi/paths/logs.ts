@@ -16,7 +16,7 @@ export function registerLogPaths(registry: OpenAPIRegistry): void {
     path: "/api/v1/logs",
     tag: "Logs",
     summary:
-      "Log training (an athlete for themselves; staff for an athlete of their team). Entries of one rung on one date form one session, however many posts they came in. Body at most 64 kB.",
+      "Log training (an athlete for themselves; staff for an athlete of their team). Entries of one rung on one date form one session, however many posts they came in. `verdicts` has one item per ladder whose current rung (as of the write) the log names; entries on other rungs of a placed ladder (warm-ups, a phone syncing after a move) are kept but judge nothing. Body at most 64 kB.",
     headers: zIdempotencyHeader,
     body: ZCreateLog,
     ok: { status: 201, schema: ZLogWithVerdicts, description: "Created (a replay answers the original status and body)" },
