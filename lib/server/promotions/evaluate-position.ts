@@ -56,14 +56,14 @@ export async function evaluatePosition(tx: Tx, input: EvaluatePositionInput): Pr
   const teamId = input.actor === "system" ? undefined : input.actor.teamId;
   const ctx = await loadPositionContext(tx, { positionId: input.positionId, teamId, lock: !input.locked });
   if (!ctx) throw new NotFound("position");
-  const judged = await judgePosition(tx, ctx, input.asOf);
+  const judged = judgePosition(ctx, input.asOf);
   const outcome = await act(tx, ctx, judged, input);
 
   if (outcome.promotedTo) {
     // The athlete is on a new rung: its figures start from the evidence there (usually none yet).
     const moved = await loadPositionContext(tx, { positionId: ctx.position.id });
     if (moved) {
-      const fresh = await judgePosition(tx, moved, input.asOf);
+      const fresh = judgePosition(moved, input.asOf);
       await writeFigures(tx, moved, fresh, { ...outcome, pendingDirection: moved.pending?.direction ?? null, achieved: false });
     }
   } else {

@@ -17,7 +17,7 @@ export async function forecastPosition(actor: Actor, athleteId: string, ladderId
   const positionId = await findVisiblePosition(db, actor, athleteId, ladderId);
   const ctx = await loadPositionContext(db, { positionId, teamId: actor.teamId });
   if (!ctx) throw new NotFound("position");
-  const { sessions, today } = await judgePosition(db, ctx, asOf);
+  const { sessions, today } = judgePosition(ctx, asOf);
   const points: ForecastDto["points"] = [];
   for (const session of [...sessions].reverse()) {
     const best = sessionBest(ctx.rung.measure, session);

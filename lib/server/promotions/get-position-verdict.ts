@@ -22,7 +22,7 @@ export async function getPositionVerdict(
   const positionId = await findVisiblePosition(db, actor, where.athleteId, where.ladderId);
   const ctx = await loadPositionContext(db, { positionId, teamId: actor.teamId });
   if (!ctx) throw new NotFound("position");
-  const judged = await judgePosition(db, ctx, asOf);
+  const judged = judgePosition(ctx, asOf);
   const pending = ctx.pending;
   const achieved = ctx.position.achievedAt !== null;
   return {

@@ -1,8 +1,6 @@
 import "server-only";
-import type { Queryable } from "@/db/client";
-import { evaluate, explainVerdict, localDateOf, type Session, type Verdict } from "@/lib/engine";
+import { evaluate, explainVerdict, localDateOf, mergeSessions, type Session, type Verdict } from "@/lib/engine";
 import type { PositionContext } from "./load-position-context";
-import { loadRungSessions } from "./load-rung-sessions";
 
 export interface Judgement {
   verdict: Verdict;
@@ -14,15 +12,14 @@ export interface Judgement {
   lastPainOn: string | null;
 }
 
-/** The engine's verdict on a position as of an instant: pure evaluation over the stored sessions. */
-export async function judgePosition(q: Queryable, ctx: PositionContext, asOf: Date): Promise<Judgement> {
+/**
+ * The engine's verdict on a position as of an instant: pure evaluation over the entries read with
+ * the context, merged per date (all entries of one rung on one date are one session), up to the
+ * team-local date of `asOf`.
+ */
+export function judgePosition(ctx: PositionContext, asOf: Date): Judgement {
   const today = localDateOf(asOf, ctx.timeZone);
-  const sessions = await loadRungSessions(q, {
-    athleteId: ctx.position.athleteId,
-    rungId: ctx.rung.id,
-    since: ctx.position.since,
-    until: today,
-  });
+  const sessions = mergeSessions(ctx.entries.filter((entry) => entry.date <= today));
   const verdict = evaluate({
     measure: ctx.rung.measure,
     standard: ctx.standard,

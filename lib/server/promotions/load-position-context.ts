@@ -2,7 +2,7 @@ import "server-only";
 import { and, eq, sql } from "drizzle-orm";
 import type { Queryable } from "@/db/client";
 import { athletePositions, athletes, ladders, rungs, standards, teams } from "@/db/schema";
-import type { Measure, PrerequisiteState, PromotionMode, Standard } from "@/lib/engine";
+import type { Measure, PrerequisiteState, PromotionMode, Session, Standard } from "@/lib/engine";
 import { standardOf } from "./standard-of";
 
 export interface RungRef {
@@ -36,6 +36,11 @@ export interface PositionContext {
   prerequisites: PrerequisiteState[];
   /** The proposal waiting for a coach on this position, if any (at most one). */
   pending: { id: string; direction: "up" | "down" } | null;
+  /**
+   * Every live entry on the current rung since the athlete reached it, oldest first and not yet
+   * merged into sessions (judgePosition merges them and drops dates after its "today").
+   */
+  entries: Session[];
 }
 
 /** The nearest live rung above the position's rung (archived rungs sit at ≤ 0). */
@@ -69,13 +74,21 @@ const prerequisites = sql<PrerequisiteState[]>`(
     where r.ladder_id = ${athletePositions.ladderId} and r.archived_at is null and r.position > ${rungs.position}
     order by r.position limit 1))`;
 
+/** The entries on the current rung since the position's date, as the engine reads them. */
+const rungEntries = sql<Session[]>`(
+  select coalesce(json_agg(json_build_object('date', e.performed_on, 'sets', e.sets, 'pain', e.pain)
+    order by e.performed_on, e.created_at), '[]'::json)
+  from log_entries e join logs l on l.id = e.log_id
+  where e.athlete_id = ${athletePositions.athleteId} and e.rung_id = ${athletePositions.rungId}
+    and e.performed_on >= ${athletePositions.since} and e.deleted_at is null and l.deleted_at is null)`;
+
 const pendingProposal = sql<PositionContext["pending"]>`(
   select json_build_object('id', p.id, 'direction', p.direction) from promotions p
   where p.position_id = ${athletePositions.id} and p.status = 'pending' limit 1)`;
 
 /**
- * Reads one position with its ladder, rung, standard, neighbours, prerequisites and pending
- * proposal in one named statement (the logging path runs it on every log). `teamId` scopes the
+ * Reads one position with its ladder, rung, standard, neighbours, prerequisites, pending proposal
+ * and the entries on its rung in one named statement (the logging path runs it on every log). `teamId` scopes the
  * read for a caller acting for a team; the system (daily job, seed) passes none. With `lock`, the
  * position row is locked FOR UPDATE first, in its own statement, so this read (a fresh snapshot)
  * sees every move committed before the lock was granted.
@@ -128,6 +141,7 @@ export async function loadPositionContext(
       previousRung,
       prerequisites,
       pending: pendingProposal,
+      entries: rungEntries,
     })
     .from(athletePositions)
     .innerJoin(athletes, eq(athletes.id, athletePositions.athleteId))
@@ -151,5 +165,6 @@ export async function loadPositionContext(
     previousRung: row.previousRung,
     prerequisites: row.nextRung ? row.prerequisites : [],
     pending: row.pending,
+    entries: row.entries,
   };
 }
