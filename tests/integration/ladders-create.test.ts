@@ -38,6 +38,20 @@ describe("creating ladders", () => {
     expect(read.data).toMatchObject({ name: body.name, notes: "Lean forward slowly.", archived: false, starter: false });
   });
 
+  it("gives a standard sent without a step-down rule the usual one, and keeps an explicit null (off)", async () => {
+    const { owner } = await createTeam();
+    const token = await bearerFor(owner);
+    const body = ladderBody(["Tuck hold", "Adv tuck hold"]);
+    const [usual, off] = body.rungs;
+    const created = await call(createRoute, { token, json: { ...body, rungs: [usual, { ...off, standard: { ...off!.standard, stepDown: null } }] } });
+    expect(created.status).toBe(201);
+    const [first, second] = (created.data as unknown as { rungs: { standard: { stepDown: unknown } }[] }).rungs;
+    // The design brief's defaults (§4): pain in 2 of the last 3 sessions, or best value below 70 %
+    // of the target in 2 consecutive sessions.
+    expect(first!.standard.stepDown).toEqual({ painSessions: 2, painWindow: 3, dropBelowPct: 70, dropSessions: 2 });
+    expect(second!.standard.stepDown).toBeNull();
+  });
+
   it("writes nothing when one rung of the body is bad, and names the path of every problem", async () => {
     const { owner, teamId } = await createTeam();
     const token = await bearerFor(owner);

@@ -1,9 +1,13 @@
 import "server-only";
 import type { Tx } from "@/db/client";
 import { rungPrerequisites, rungs, standards } from "@/db/schema";
+import { DEFAULT_STEP_DOWN } from "@/lib/engine";
 import type { RungDto, RungInput, StandardInput } from "@/lib/validation/ladders";
 
-/** A standard as stored: absent optionals become null, except an absent stepDown (engine default). */
+/**
+ * A standard as stored: absent optionals become null, except stepDown: absent means the usual rule
+ * (stored, so later changes to the default never move a coach's rung), null means switched off.
+ */
 export function standardRow(standard: StandardInput) {
   return {
     sets: standard.sets,
@@ -15,7 +19,7 @@ export function standardRow(standard: StandardInput) {
     sessionsWindow: standard.sessionsWindow,
     minDaysOnRung: standard.minDaysOnRung,
     painFree: standard.painFree,
-    stepDown: standard.stepDown ?? null,
+    stepDown: standard.stepDown === undefined ? { ...DEFAULT_STEP_DOWN } : standard.stepDown,
   };
 }
 
