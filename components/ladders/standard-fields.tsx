@@ -5,6 +5,7 @@ import type { z } from "zod";
 import { TextField } from "@/components/ui/field";
 import { describeStandard, type Measure } from "@/lib/engine";
 import { ZStandardInput, type ZRungInput } from "@/lib/validation/ladders";
+import { StepDownFields } from "./step-down-fields";
 
 type FormIn = z.input<typeof ZRungInput>;
 type FormOut = z.output<typeof ZRungInput>;
@@ -71,6 +72,7 @@ export function StandardFields({ form, measure, idBase }: { form: UseFormReturn<
         <span className="font-semibold">In words: </span>
         {parsed.success ? describeStandard(measure, parsed.data) : "complete the numbers above to see the rule in words."}
       </p>
+      <StepDownFields form={form} idBase={idBase} />
     </fieldset>
   );
 }

@@ -76,6 +76,10 @@ test("a coach builds a ladder, reorders it, exports it, imports a copy and place
   await expect(first.getByText("Sets must be at least 1.")).toBeVisible();
   await first.getByLabel("Sets", { exact: true }).fill("3");
   await first.getByLabel("Caution (athletes see this)").fill("Warm up your wrists first.");
+  // Step-down proposals: on with the usual rule, said in words; switched off for this rung.
+  await expect(first.getByTestId("step-down-preview")).toContainText("pain is flagged in 2 of the last 3 sessions");
+  await first.getByLabel("Propose a step down when it hurts or slips").uncheck();
+  await expect(first.getByTestId("step-down-preview")).toHaveText("No step-down proposals on this rung.");
   await first.getByRole("button", { name: "Add rung" }).click();
   await expect(first).toBeHidden();
 
@@ -84,6 +88,11 @@ test("a coach builds a ladder, reorders it, exports it, imports a copy and place
   const rungs = page.getByRole("listitem").filter({ has: page.getByText("Ready when:") });
   await expect(rungs).toHaveCount(3);
   await expect(rungs.nth(1)).toContainText("3 sets of at least 15 s");
+  const ladderId = new URL(page.url()).pathname.split("/").pop()!;
+  const saved = (await (await page.request.get(`/api/v1/ladders/${ladderId}`)).json()) as { rungs: { name: string; standard: { stepDown: unknown } }[] };
+  const stepDownOf = (name: string) => saved.rungs.find((r) => r.name === name)?.standard.stepDown;
+  expect(stepDownOf("Frog stand")).toBeNull();
+  expect(stepDownOf("Tuck planche")).toEqual({ painSessions: 2, painWindow: 3, dropBelowPct: 70, dropSessions: 2 });
   await expect(rungs.nth(0)).toContainText("Warm up your wrists first.");
 
   // Reorder with the keyboard-reachable buttons; the order survives a reload.
