@@ -12,7 +12,7 @@ import { placeOn, postLogAs, starterRung } from "../support/logging-factories";
 
 const evaluated = vi.hoisted(() => [] as { logId: string; positionIds: string[] }[]);
 vi.mock("@/lib/server/promotions/evaluate-after-log", () => ({
-  evaluateLockedPositions: async (_tx: unknown, _actor: unknown, input: { logId: string; positionIds: string[] }) => {
+  evaluateAfterLog: async (_tx: unknown, _actor: unknown, input: { logId: string; positionIds: string[] }) => {
     evaluated.push(input);
     return [];
   },

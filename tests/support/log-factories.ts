@@ -6,6 +6,7 @@ import { ladders, logEntries, logs, rungPrerequisites, rungs, standards } from "
 import { addDays, defaultStandard, localDateOf, type Measure, type SetEntry, type Standard } from "@/lib/engine";
 import type { Actor } from "@/lib/server/actor";
 import { writePlacement } from "@/lib/server/positions/write-placement";
+import { currentPositions, lockPlacedRungs } from "@/lib/server/logs/log-rungs";
 import { evaluateAfterLog } from "@/lib/server/promotions/evaluate-after-log";
 
 export const TEST_ZONE = "Europe/Amsterdam";
@@ -129,10 +130,14 @@ export async function insertSession(q: Queryable, s: LoggedSession): Promise<str
   return log!.id;
 }
 
-/** What the logging API does: write the session, then evaluate in the same transaction. */
+/**
+ * What the logging API does, through its own pieces: lock the athlete's position while reading the
+ * rung, write the session, then evaluate the position if the rung is (still) its current one.
+ */
 export async function logAndEvaluate(actor: Actor, s: LoggedSession, asOf: Date = new Date()) {
   return db.transaction(async (tx: Tx) => {
+    const placed = await lockPlacedRungs(tx, s.teamId, s.athleteId, [s.rungId]);
     const logId = await insertSession(tx, s);
-    return evaluateAfterLog(tx, actor, { athleteId: s.athleteId, logId, rungs: [{ ladderId: s.ladderId, rungId: s.rungId }] }, asOf);
+    return evaluateAfterLog(tx, actor, { positionIds: currentPositions([...placed.values()]), logId }, asOf);
   });
 }

@@ -4,7 +4,7 @@ import { logEntries, logs } from "@/db/schema";
 import { sessionBest } from "@/lib/engine/session-assessment";
 import type { Actor } from "@/lib/server/actor";
 import { withIdempotency } from "@/lib/server/http/idempotency";
-import { evaluateLockedPositions } from "@/lib/server/promotions/evaluate-after-log";
+import { evaluateAfterLog } from "@/lib/server/promotions/evaluate-after-log";
 import type { CreateLog, LogWithVerdicts } from "@/lib/validation/logs";
 import { checkSets } from "./check-sets";
 import { assertLoggableDate } from "./log-dates";
@@ -65,6 +65,6 @@ export async function writeLog(tx: Tx, actor: Actor, input: CreateLog): Promise<
     .insert(logEntries)
     .values(prepared.map((e) => ({ ...e, teamId: actor.teamId, logId: log!.id, athleteId, performedOn: input.performedOn })))
     .returning();
-  const verdicts = await evaluateLockedPositions(tx, actor, { positionIds: currentPositions(rungList), logId: log!.id });
+  const verdicts = await evaluateAfterLog(tx, actor, { positionIds: currentPositions(rungList), logId: log!.id });
   return { ...toLogDto(log!, entries), verdicts };
 }

@@ -3,7 +3,7 @@ import { and, eq, isNull } from "drizzle-orm";
 import { db } from "@/db/client";
 import { logEntries, logs } from "@/db/schema";
 import type { Actor } from "@/lib/server/actor";
-import { evaluateLockedPositions } from "@/lib/server/promotions/evaluate-after-log";
+import { evaluateAfterLog } from "@/lib/server/promotions/evaluate-after-log";
 import { auditLogChange, lockEditableLog, logSnapshot } from "./editable-log";
 import { currentPositions, lockPlacedRungs } from "./log-rungs";
 
@@ -20,7 +20,7 @@ export async function deleteLog(actor: Actor, logId: string): Promise<undefined>
     await auditLogChange(tx, actor, log.id, "log.deleted", { before: logSnapshot(log, entries) });
     // Positions whose ladder the athlete has since left need no re-evaluation.
     const placed = await lockPlacedRungs(tx, actor.teamId, log.athleteId, entries.map((e) => e.rungId));
-    await evaluateLockedPositions(tx, actor, { positionIds: currentPositions([...placed.values()]), logId: log.id });
+    await evaluateAfterLog(tx, actor, { positionIds: currentPositions([...placed.values()]), logId: log.id });
   });
   return undefined;
 }

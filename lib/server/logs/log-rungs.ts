@@ -91,7 +91,7 @@ async function whyNotPlaced(
   return new Unprocessable("Some entries name a ladder the athlete is not on.", issues);
 }
 
-/** The distinct positions holding a logged rung as their current one, for evaluateLockedPositions. */
+/** The distinct positions holding a logged rung as their current one, for evaluateAfterLog. */
 export function currentPositions(list: readonly LogRung[]): string[] {
   return [...new Set(list.filter((r) => r.isCurrent).map((r) => r.positionId))];
 }

@@ -5,7 +5,7 @@ import { logEntries, logs } from "@/db/schema";
 import { sessionBest } from "@/lib/engine/session-assessment";
 import { Unprocessable, type FieldIssue } from "@/lib/errors";
 import type { Actor } from "@/lib/server/actor";
-import { evaluateLockedPositions } from "@/lib/server/promotions/evaluate-after-log";
+import { evaluateAfterLog } from "@/lib/server/promotions/evaluate-after-log";
 import type { LogWithVerdicts, UpdateLog } from "@/lib/validation/logs";
 import { checkSets } from "./check-sets";
 import { auditLogChange, lockEditableLog, logSnapshot } from "./editable-log";
@@ -51,7 +51,7 @@ export async function updateLog(actor: Actor, logId: string, patch: UpdateLog): 
 
     const after = logSnapshot(log, entries);
     await auditLogChange(tx, actor, log.id, "log.updated", { before, after });
-    const verdicts = await evaluateLockedPositions(tx, actor, { positionIds: currentPositions(rungList), logId: log.id });
+    const verdicts = await evaluateAfterLog(tx, actor, { positionIds: currentPositions(rungList), logId: log.id });
     return { ...after, verdicts };
   });
 }
