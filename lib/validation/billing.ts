@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { zId, zName } from "./common";
+import { zId, zName, zPageQuery } from "./common";
 
 /** Currencies an offer may be priced in (ISO 4217). Amounts are integers in the minor unit. */
 export const CURRENCIES = ["EUR", "USD", "GBP", "CHF", "SEK", "NOK", "DKK", "PLN", "CAD", "AUD", "NZD", "JPY"] as const;
@@ -73,6 +73,9 @@ export const ZSubscriber = z.object({
   canReceiveAssignments: z.boolean(),
 });
 export type SubscriberDto = z.infer<typeof ZSubscriber>;
+
+/** GET /api/v1/billing/subscribers: a page at a time, by athlete name. */
+export const ZSubscribersQuery = zPageQuery;
 
 export const ZRevenue = z.object({
   month: z.string(),

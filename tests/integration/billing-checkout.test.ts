@@ -6,9 +6,11 @@ import { GET as listSubscribers } from "@/app/api/v1/billing/subscribers/route";
 import { POST as checkout } from "@/app/api/v1/offers/[id]/checkout/route";
 import { PATCH as patchOffer } from "@/app/api/v1/offers/[id]/route";
 import { GET as listOffers, POST as createOfferRoute } from "@/app/api/v1/offers/route";
+import { db } from "@/db/client";
+import { billingSubscriptions } from "@/db/schema";
 import type { PaymentsFake } from "@/scripts/dev-fakes/payments-fake.mjs";
 import { clickOnCheckout, createOffer, deliverFrom, membershipRow, startFakeForTests } from "../support/billing-factories";
-import { bearerFor, createMember, createTeam } from "../support/factories";
+import { bearerFor, createAthleteRecord, createMember, createTeam } from "../support/factories";
 import { call } from "../support/http";
 
 let fake: PaymentsFake;
@@ -138,6 +140,25 @@ describe("checkout through the SDK and the fake", () => {
     expect(failed.location).toMatch(/\/billing\?checkout=cancelled$/);
     expect(fake.outbox.length).toBe(from);
     expect((await membershipRow(athlete.athleteId!))?.status).toBe("pending");
+  });
+
+  it("pages the team's memberships by athlete name", async () => {
+    const { teamId, ownerToken } = await teamWithAthlete();
+    const offerId = await createOffer(ownerToken);
+    const names = ["Cleo Marsh", "Abel Frost", "Bea Lund"];
+    for (const name of names) {
+      const athleteId = await createAthleteRecord(teamId, name);
+      await db.insert(billingSubscriptions).values({ teamId, athleteId, offerId, status: "active" });
+    }
+    const first = await call(listSubscribers, { token: ownerToken, path: "/api/v1/billing/subscribers?limit=2" });
+    expect(first.status).toBe(200);
+    expect((first.data.items as { athleteName: string }[]).map((s) => s.athleteName)).toEqual(["Abel Frost", "Bea Lund"]);
+    const cursor = first.data.nextCursor as string;
+    expect(cursor).toEqual(expect.any(String));
+    const second = await call(listSubscribers, { token: ownerToken, path: `/api/v1/billing/subscribers?limit=2&cursor=${encodeURIComponent(cursor)}` });
+    expect((second.data.items as { athleteName: string }[]).map((s) => s.athleteName)).toEqual(["Cleo Marsh"]);
+    expect(second.data.nextCursor).toBeNull();
+    expect((await call(listSubscribers, { token: ownerToken, path: "/api/v1/billing/subscribers?limit=0" })).status).toBe(422);
   });
 
   it("answers 503 and stores nothing when the provider does not answer", async () => {

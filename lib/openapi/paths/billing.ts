@@ -9,6 +9,7 @@ import {
   ZOffer,
   ZRevenue,
   ZSubscriber,
+  ZSubscribersQuery,
   ZUpdateOffer,
 } from "@/lib/validation/billing";
 import { defineOperation, pageOf, zIdParam } from "../define";
@@ -48,7 +49,8 @@ export function registerBillingPaths(registry: OpenAPIRegistry): void {
     method: "get",
     path: "/api/v1/billing/subscribers",
     tag,
-    summary: "Every membership of the team with its status and whether new plans can still be assigned (owner)",
+    summary: "The team's memberships by athlete name, a page at a time, with status and whether new plans can still be assigned (owner)",
+    query: ZSubscribersQuery,
     ok: { status: 200, schema: pageOf(ZSubscriber) },
   });
   defineOperation(registry, { method: "get", path: "/api/v1/billing/revenue", tag, summary: "Paid this calendar month (team time zone), per currency (owner)", ok: { status: 200, schema: ZRevenue } });

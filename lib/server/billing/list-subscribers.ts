@@ -1,14 +1,17 @@
 import "server-only";
-import { asc, eq } from "drizzle-orm";
+import { and, asc, eq, gt, or } from "drizzle-orm";
+import type { z } from "zod";
 import { db } from "@/db/client";
 import { athletes, billingOffers, billingSubscriptions } from "@/db/schema";
 import type { Actor } from "@/lib/server/actor";
-import type { SubscriberDto, SubscriptionStatus } from "@/lib/validation/billing";
+import { decodeCursor, pageOf, zNameIdCursor } from "@/lib/server/http/cursor";
+import type { SubscriberDto, SubscriptionStatus, ZSubscribersQuery } from "@/lib/validation/billing";
 import { membershipAllowsAssignments } from "./access-rule";
 import { graceDaysOf } from "./billing-settings";
 
-/** Every membership of the team (active, past due, cancelled, pending), by athlete name. */
-export async function listSubscribers(actor: Actor, now = new Date()) {
+/** The team's memberships (active, past due, cancelled, pending) by athlete name, a page at a time. */
+export async function listSubscribers(actor: Actor, query: z.output<typeof ZSubscribersQuery>, now = new Date()) {
+  const after = decodeCursor(zNameIdCursor, query.cursor);
   const graceDays = await graceDaysOf(db, actor.teamId);
   const rows = await db
     .select({
@@ -26,14 +29,21 @@ export async function listSubscribers(actor: Actor, now = new Date()) {
     .from(billingSubscriptions)
     .innerJoin(athletes, eq(athletes.id, billingSubscriptions.athleteId))
     .innerJoin(billingOffers, eq(billingOffers.id, billingSubscriptions.offerId))
-    .where(eq(billingSubscriptions.teamId, actor.teamId))
-    .orderBy(asc(athletes.name), asc(athletes.id));
-  const items: SubscriberDto[] = rows.map((row) => ({
+    .where(
+      and(
+        eq(billingSubscriptions.teamId, actor.teamId),
+        after ? or(gt(athletes.name, after.name), and(eq(athletes.name, after.name), gt(athletes.id, after.id))) : undefined,
+      ),
+    )
+    .orderBy(asc(athletes.name), asc(athletes.id))
+    .limit(query.limit + 1);
+  const page = pageOf(rows, query.limit, (row) => ({ name: row.athleteName, id: row.athleteId }));
+  const items: SubscriberDto[] = page.items.map((row) => ({
     ...row,
     status: row.status as SubscriptionStatus,
     currentPeriodEnd: row.currentPeriodEnd?.toISOString() ?? null,
     lapsedAt: row.lapsedAt?.toISOString() ?? null,
     canReceiveAssignments: membershipAllowsAssignments(row, graceDays, now),
   }));
-  return { items, nextCursor: null };
+  return { items, nextCursor: page.nextCursor };
 }
