@@ -37,7 +37,9 @@ describe("deleting form checks and their files", () => {
     const key = `form-checks/drain-test/${crypto.randomUUID()}.webm`;
     await putObject(key, fileOf("video/webm", 100), "video/webm");
     const [id] = await enqueueStorageDeletion(db, [key]);
-    const now = new Date();
+    // A second ahead: the row is due at the database's now() (microseconds), which a JS Date taken in
+    // the same millisecond (milliseconds) could otherwise fall just short of.
+    const now = new Date(Date.now() + 1_000);
     const failing = await drainStorageDeletions({ ids: [id!], now, remove: async () => Promise.reject(new Error("storage is down")) });
     expect(failing).toEqual({ removed: 0, failed: 1 });
     const [row] = await db.select().from(storageDeletions).where(eq(storageDeletions.id, id!));
