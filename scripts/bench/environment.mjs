@@ -61,7 +61,7 @@ export async function startPostgres() {
     asPg(path.join(bin, "pg_ctl"), ["-D", data, "-m", "fast", "stop"]);
     fs.rmSync(dir, { recursive: true, force: true });
   });
-  return { url: `postgres://postgres@127.0.0.1:${port}/postgres`, socketUrl: `postgres://postgres@${encodeURIComponent(data)}:${port}/postgres`, port };
+  return { url: `postgres://postgres@127.0.0.1:${port}/postgres`, port };
 }
 
 function run(command, args, options) {

@@ -2,6 +2,7 @@
 // `npm run bench`: benchmarks against a production build on loopback, in one run. Starts its own
 // PostgreSQL cluster and `next start`, seeds its own data, prints a table per bench and writes
 // scripts/bench/results/<bench>-<time>.json. Options: --only=log,promotion, --seconds=20, --skip-build.
+// BENCH_PGSS=1 also prints the statements PostgreSQL spent the most time on (pg_stat_statements).
 // Later issues add a file per bench and one line to BENCHES.
 import { spawnSync } from "node:child_process";
 import fs from "node:fs";
@@ -10,6 +11,7 @@ import { fileURLToPath } from "node:url";
 import { build, freePort, migrate, secret, shutdown, startApp, startPostgres } from "./environment.mjs";
 import { logBench } from "./log-bench.mjs";
 import { promotionBench } from "./promotion-bench.mjs";
+import { printStatementStats } from "./statement-stats.mjs";
 import { printTable } from "./stats.mjs";
 
 const BENCHES = { log: logBench, promotion: promotionBench };
@@ -68,6 +70,7 @@ async function main() {
     fs.writeFileSync(file, JSON.stringify({ ...result, at: new Date().toISOString(), seconds, cpus: (await import("node:os")).cpus().length }, null, 2));
     console.log(`[bench] results: ${path.relative(root, file)}`);
   }
+  if (process.env.BENCH_PGSS) await printStatementStats(pgInfo.url);
 }
 
 main()
