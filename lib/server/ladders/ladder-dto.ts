@@ -6,6 +6,7 @@ import { athletePositions, ladders, rungPrerequisites, rungs, standards } from "
 import { describeStandard, type Measure } from "@/lib/engine";
 import { NotFound } from "@/lib/errors";
 import type { LadderDto, RungDto } from "@/lib/validation/ladders";
+import { standardColumns } from "@/lib/server/ladders/standard-columns";
 
 const requiredRung = alias(rungs, "required_rung");
 const requiredLadder = alias(ladders, "required_ladder");
@@ -27,18 +28,7 @@ export async function loadRungs(q: Queryable, teamId: string, ladderIds: string[
       tags: rungs.tags,
       archivedAt: rungs.archivedAt,
       athleteCount: sql<number>`(select count(*)::int from ${athletePositions} where ${athletePositions.rungId} = ${rungs.id})`,
-      standard: {
-        sets: standards.sets,
-        minValue: standards.minValue,
-        minReps: standards.minReps,
-        maxRpe: standards.maxRpe,
-        minRir: standards.minRir,
-        sessionsRequired: standards.sessionsRequired,
-        sessionsWindow: standards.sessionsWindow,
-        minDaysOnRung: standards.minDaysOnRung,
-        painFree: standards.painFree,
-        stepDown: standards.stepDown,
-      },
+      standard: standardColumns,
     })
     .from(rungs)
     .innerJoin(standards, eq(standards.rungId, rungs.id))

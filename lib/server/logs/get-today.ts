@@ -10,6 +10,7 @@ import { getPositionVerdict } from "@/lib/server/promotions/get-position-verdict
 import type { TodayDto, TodayRung } from "@/lib/validation/logs";
 import { entryColumns, toEntryDto } from "./log-dto";
 import { plannedBlocksFor } from "./today-plan";
+import { standardRuleColumns } from "@/lib/server/ladders/standard-columns";
 
 /**
  * The athlete's day: the planned blocks with, per slot, their current rung of the slot's ladder
@@ -34,17 +35,7 @@ export async function getToday(actor: Actor, athleteId: string, date?: string): 
         readiness: athletePositions.readiness,
         status: athletePositions.status,
         since: athletePositions.since,
-        standard: {
-          sets: standards.sets,
-          minValue: standards.minValue,
-          minReps: standards.minReps,
-          maxRpe: standards.maxRpe,
-          minRir: standards.minRir,
-          sessionsRequired: standards.sessionsRequired,
-          sessionsWindow: standards.sessionsWindow,
-          minDaysOnRung: standards.minDaysOnRung,
-          painFree: standards.painFree,
-        },
+        standard: standardRuleColumns,
       })
       .from(athletePositions)
       .innerJoin(ladders, eq(ladders.id, athletePositions.ladderId))

@@ -10,6 +10,7 @@ import { describeStandard } from "@/lib/engine/standard-text";
 import type { Actor } from "@/lib/server/actor";
 import { getAthlete } from "@/lib/server/athletes/get-athlete";
 import type { LadderProgress, ProgressDto } from "@/lib/validation/progress";
+import { standardRuleColumns } from "@/lib/server/ladders/standard-columns";
 
 /** Sessions older than this are left off the charts. */
 const HISTORY_DAYS = 365;
@@ -36,17 +37,7 @@ async function positionsOf(teamId: string, athleteId: string) {
       since: athletePositions.since,
       readiness: athletePositions.readiness,
       status: athletePositions.status,
-      standard: {
-        sets: standards.sets,
-        minValue: standards.minValue,
-        minReps: standards.minReps,
-        maxRpe: standards.maxRpe,
-        minRir: standards.minRir,
-        sessionsRequired: standards.sessionsRequired,
-        sessionsWindow: standards.sessionsWindow,
-        minDaysOnRung: standards.minDaysOnRung,
-        painFree: standards.painFree,
-      },
+      standard: standardRuleColumns,
     })
     .from(athletePositions)
     .innerJoin(ladders, eq(ladders.id, athletePositions.ladderId))

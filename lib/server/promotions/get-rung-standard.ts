@@ -7,6 +7,7 @@ import { NotFound } from "@/lib/errors";
 import type { Actor } from "@/lib/server/actor";
 import type { BacktestStandard } from "@/lib/validation/backtest";
 import { standardOf } from "./standard-of";
+import { standardColumns } from "@/lib/server/ladders/standard-columns";
 
 /** A rung of the actor's team with its current standard, as the what-if page starts from. */
 export async function getRungStandard(actor: Actor, ladderId: string, rungId: string) {
@@ -15,18 +16,7 @@ export async function getRungStandard(actor: Actor, ladderId: string, rungId: st
       ladderName: ladders.name,
       rungName: rungs.name,
       measure: rungs.measure,
-      standard: {
-        sets: standards.sets,
-        minValue: standards.minValue,
-        minReps: standards.minReps,
-        maxRpe: standards.maxRpe,
-        minRir: standards.minRir,
-        sessionsRequired: standards.sessionsRequired,
-        sessionsWindow: standards.sessionsWindow,
-        minDaysOnRung: standards.minDaysOnRung,
-        painFree: standards.painFree,
-        stepDown: standards.stepDown,
-      },
+      standard: standardColumns,
     })
     .from(rungs)
     .innerJoin(ladders, eq(ladders.id, rungs.ladderId))

@@ -4,6 +4,7 @@ import type { Queryable } from "@/db/client";
 import { athletePositions, athletes, ladders, rungs, standards, teams } from "@/db/schema";
 import type { Measure, PrerequisiteState, PromotionMode, Session, Standard } from "@/lib/engine";
 import { standardOf } from "./standard-of";
+import { standardColumns } from "@/lib/server/ladders/standard-columns";
 
 export interface RungRef {
   id: string;
@@ -124,18 +125,7 @@ export async function loadPositionContext(
       },
       ladder: { id: ladders.id, name: ladders.name, promotionMode: ladders.promotionMode },
       rung: { id: rungs.id, name: rungs.name, position: rungs.position, measure: rungs.measure },
-      standard: {
-        sets: standards.sets,
-        minValue: standards.minValue,
-        minReps: standards.minReps,
-        maxRpe: standards.maxRpe,
-        minRir: standards.minRir,
-        sessionsRequired: standards.sessionsRequired,
-        sessionsWindow: standards.sessionsWindow,
-        minDaysOnRung: standards.minDaysOnRung,
-        painFree: standards.painFree,
-        stepDown: standards.stepDown,
-      },
+      standard: standardColumns,
       timeZone: teams.timeZone,
       nextRung,
       previousRung,
