@@ -7,6 +7,8 @@ import { enqueueMail } from "@/lib/server/jobs/enqueue-mail";
 export interface NoticeInput {
   kind: "promotion" | "approval_needed";
   promotionId: string;
+  /** The promotion's team, when the caller has it at hand (saves reading it back). */
+  teamId?: string;
 }
 
 /**
@@ -15,7 +17,12 @@ export interface NoticeInput {
  * by the worker at send time.
  */
 export async function enqueueNotice(tx: Tx, input: NoticeInput): Promise<void> {
-  const [row] = await tx.select({ teamId: promotions.teamId }).from(promotions).where(eq(promotions.id, input.promotionId));
-  if (!row) return;
-  await enqueueMail(tx, { kind: input.kind, teamId: row.teamId, promotionId: input.promotionId });
+  const teamId = input.teamId ?? (await teamOf(tx, input.promotionId));
+  if (!teamId) return;
+  await enqueueMail(tx, { kind: input.kind, teamId, promotionId: input.promotionId });
+}
+
+async function teamOf(tx: Tx, promotionId: string): Promise<string | null> {
+  const [row] = await tx.select({ teamId: promotions.teamId }).from(promotions).where(eq(promotions.id, promotionId));
+  return row?.teamId ?? null;
 }

@@ -109,7 +109,7 @@ async function act(tx: Tx, ctx: PositionContext, judged: Judgement, input: Evalu
       verdict: storedVerdict(verdict, judged.explanation),
       at: input.asOf,
     });
-    await enqueueNotice(tx, { kind: "promotion", promotionId });
+    await enqueueNotice(tx, { kind: "promotion", promotionId, teamId: ctx.position.teamId });
     return { promotedTo: toRungId, pendingPromotionId: null, pendingDirection: null, achieved: toRungId === null };
   }
 
@@ -122,7 +122,7 @@ async function act(tx: Tx, ctx: PositionContext, judged: Judgement, input: Evalu
 
 async function propose(tx: Tx, ctx: PositionContext, draft: PromotionDraft): Promise<string> {
   const pending = await recordPendingPromotion(tx, ctx, draft);
-  if (pending.created) await enqueueNotice(tx, { kind: "approval_needed", promotionId: pending.id });
+  if (pending.created) await enqueueNotice(tx, { kind: "approval_needed", promotionId: pending.id, teamId: ctx.position.teamId });
   return pending.id;
 }
 
