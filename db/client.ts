@@ -15,7 +15,9 @@ function connect(): Db {
   if (instance) return instance;
   const url = process.env.DATABASE_URL;
   if (!url) throw new Error("DATABASE_URL is not set");
-  pool = new Pool({ connectionString: url, max: Number(process.env.DATABASE_POOL_SIZE ?? 10) });
+  // Pipeline mode: a statement goes out as soon as it is submitted, so a transaction can send several
+  // in one trip (db/one-trip.ts). Awaited one by one, statements behave exactly as without it.
+  pool = new Pool({ connectionString: url, max: Number(process.env.DATABASE_POOL_SIZE ?? 10), pipeline: true });
   instance = drizzle(pool, { schema });
   return instance;
 }

@@ -16,6 +16,11 @@ vi.mock("@/lib/server/promotions/evaluate-after-log", () => ({
     evaluated.push(input);
     return [];
   },
+  // Creating a log reads the positions' contexts itself (in the same trip as its inserts).
+  evaluateLoaded: async (_tx: unknown, _actor: unknown, input: { logId: string; contexts: { position: { id: string } }[] }) => {
+    evaluated.push({ logId: input.logId, positionIds: input.contexts.map((c) => c.position.id) });
+    return { verdicts: [], figures: () => [] };
+  },
 }));
 
 async function positionIdOf(athleteId: string, ladderId: string): Promise<string> {

@@ -2,7 +2,9 @@ import "server-only";
 import { createHash } from "node:crypto";
 import { NextResponse } from "next/server";
 import { and, eq, lt, sql } from "drizzle-orm";
-import { db, type Tx } from "@/db/client";
+import { db, type Db, type Tx } from "@/db/client";
+import { oneTrip, transactionInTrips, type TripsResult } from "@/db/one-trip";
+import { preparedOnce, preparedSql } from "@/db/prepared";
 import { idempotencyKeys } from "@/db/schema";
 import { BadRequest, Conflict } from "@/lib/errors";
 
@@ -58,6 +60,22 @@ function sweepNowAndThen(): void {
     .catch(() => undefined);
 }
 
+/** A keyed write in two steps, so its first reads travel with the claim in one trip. */
+export interface IdempotentWrite<R> {
+  /**
+   * Reads (and row locks) sent together with the claim. They must submit synchronously and write
+   * nothing. A read that locks rows adds `keyLock` (with this `lockKey`) to its conditions, so it
+   * skips them at once when another request still holds the key (this one answers 409 then, without
+   * queueing behind the first one's locks).
+   */
+  read: (tx: Tx, lockKey: string) => Promise<R>;
+  /**
+   * The write, run only once the key is claimed. Returns the answer, and the statements it still
+   * has to send (sent in one trip with the stored answer).
+   */
+  write: (tx: Tx, read: R) => Promise<{ value: unknown; last?: () => Promise<unknown>[] }>;
+}
+
 /**
  * Runs a write at most once per (caller, route, key), in one transaction:
  * 1. claims the key first: an INSERT … ON CONFLICT DO NOTHING guarded by a transaction-scoped
@@ -68,21 +86,21 @@ function sweepNowAndThen(): void {
  * 3. a key already used answers from the stored row: the same body gets the original status and
  *    body, a different body is 409.
  */
-export async function withIdempotency(request: IdempotentRequest, operation: (tx: Tx) => Promise<unknown>): Promise<Response> {
+export async function withIdempotency<R>(request: IdempotentRequest, operation: IdempotentWrite<R>): Promise<Response> {
   sweepNowAndThen();
   const hash = requestHash(request.body);
+  const lockKey = `${request.ownerId}\n${request.scope}\n${request.key}`;
   type Outcome = { replay: { status: number; body: unknown } } | { replay: null; value: unknown };
-  const outcome = await db.transaction(async (tx): Promise<Outcome> => {
-    const claimId = await claim(tx, request, hash);
-    if (!claimId) return { replay: await storedAnswer(tx, request, hash) };
-    const value = await operation(tx);
-    await tx
-      .update(idempotencyKeys)
-      .set({ state: "done", responseStatus: request.status, responseBody: value ?? null })
-      .where(eq(idempotencyKeys.id, claimId))
-      .prepare("idempotency_done")
-      .execute();
-    return { replay: null, value };
+  const outcome = await transactionInTrips(async (tx): Promise<TripsResult<Outcome>> => {
+    // BEGIN, the claim and the operation's reads go out together.
+    const [claimId, read] = await oneTrip(tx, () => [claim(tx, request, hash, lockKey), operation.read(tx, lockKey)] as const);
+    if (!claimId) return { value: { replay: await storedAnswer(tx, request, hash) } };
+    const { value, last } = await operation.write(tx, read);
+    // The operation's last statements, the stored answer and COMMIT go out together.
+    return {
+      value: { replay: null, value },
+      last: () => [...(last?.() ?? []), markDone(tx).execute({ id: claimId, status: request.status, body: value ?? null })],
+    };
   });
   if (outcome.replay) {
     const { status, body } = outcome.replay;
@@ -91,16 +109,31 @@ export async function withIdempotency(request: IdempotentRequest, operation: (tx
   return NextResponse.json(outcome.value, { status: request.status });
 }
 
+/** Taken while a request holds the key: try-lock, so a second request never waits for the first. */
+export const keyLock = sql`pg_try_advisory_xact_lock(hashtextextended(${sql.placeholder("lockKey")}, 0))`;
+
+const claimKey = preparedSql<{ id: string }>(
+  "idempotency_claim",
+  sql`insert into ${idempotencyKeys} (owner_id, scope, key, request_hash)
+      select ${sql.placeholder("ownerId")}::uuid, ${sql.placeholder("scope")}, ${sql.placeholder("key")}, ${sql.placeholder("hash")}
+      where ${keyLock}
+      on conflict do nothing
+      returning id`,
+);
+
+const markDone = preparedOnce((database: Db) =>
+  database
+    .update(idempotencyKeys)
+    .set({ state: "done", responseStatus: sql<number>`${sql.placeholder("status")}`, responseBody: sql.placeholder("body") })
+    .where(eq(idempotencyKeys.id, sql.placeholder("id")))
+    .prepare("idempotency_done"),
+);
+
 /** The claim's id, or null when the key is taken (stored, or held by a request still running). */
-async function claim(tx: Tx, request: IdempotentRequest, hash: string): Promise<string | null> {
-  const lockKey = `${request.ownerId}\n${request.scope}\n${request.key}`;
-  const result = await tx.execute<{ id: string }>(sql`
-    insert into ${idempotencyKeys} (owner_id, scope, key, request_hash)
-    select ${request.ownerId}::uuid, ${request.scope}, ${request.key}, ${hash}
-    where pg_try_advisory_xact_lock(hashtextextended(${lockKey}, 0))
-    on conflict do nothing
-    returning id`);
-  return result.rows[0]?.id ?? null;
+function claim(tx: Tx, request: IdempotentRequest, hash: string, lockKey: string): Promise<string | null> {
+  return claimKey(tx)
+    .execute({ ownerId: request.ownerId, scope: request.scope, key: request.key, hash, lockKey })
+    .then((result) => result.rows[0]?.id ?? null);
 }
 
 /**

@@ -1,42 +1,93 @@
 import "server-only";
-import type { Tx } from "@/db/client";
+import { randomUUID } from "node:crypto";
+import { sql } from "drizzle-orm";
+import type { Db, Tx } from "@/db/client";
+import { oneTrip } from "@/db/one-trip";
+import { preparedOnce, preparedVariants } from "@/db/prepared";
 import { logEntries, logs } from "@/db/schema";
 import { sessionBest } from "@/lib/engine/session-assessment";
 import type { Actor } from "@/lib/server/actor";
 import { withIdempotency } from "@/lib/server/http/idempotency";
-import { evaluateAfterLog } from "@/lib/server/promotions/evaluate-after-log";
+import { evaluateLoaded } from "@/lib/server/promotions/evaluate-after-log";
+import { loadPositionContext } from "@/lib/server/promotions/load-position-context";
 import type { CreateLog, LogWithVerdicts } from "@/lib/validation/logs";
 import { checkSets } from "./check-sets";
 import { assertLoggableDate } from "./log-dates";
 import { logAthleteOf } from "./log-athlete";
 import { toLogDto } from "./log-dto";
-import { currentPositions, logRungsOf } from "./log-rungs";
+import { currentPositions, lockPlacedRungs, placedOrThrow, type LogRung } from "./log-rungs";
 
 export const CREATE_LOG_SCOPE = "POST /api/v1/logs";
+
+const insertLog = preparedOnce((database: Db) =>
+  database
+    .insert(logs)
+    .values({
+      id: sql.placeholder("id"),
+      teamId: sql.placeholder("teamId"),
+      athleteId: sql.placeholder("athleteId"),
+      performedOn: sql.placeholder("performedOn"),
+      durationMinutes: sql.placeholder("durationMinutes"),
+      sessionRpe: sql.placeholder("sessionRpe"),
+      enteredById: sql.placeholder("enteredById"),
+    })
+    .returning()
+    .prepare("insert_log"),
+);
+
+/** One statement per number of entries (a log has a few), each prepared once. */
+const insertEntries = preparedVariants((database: Db, count: number) =>
+  database
+    .insert(logEntries)
+    .values(
+      Array.from({ length: count }, (_, i) => ({
+        teamId: sql.placeholder("teamId"),
+        logId: sql.placeholder("logId"),
+        athleteId: sql.placeholder("athleteId"),
+        performedOn: sql.placeholder("performedOn"),
+        ladderId: sql.placeholder(`ladderId${i}`),
+        rungId: sql.placeholder(`rungId${i}`),
+        sets: sql.placeholder(`sets${i}`),
+        bestValue: sql.placeholder(`bestValue${i}`),
+        pain: sql.placeholder(`pain${i}`),
+        note: sql.placeholder(`note${i}`),
+      })),
+    )
+    .returning()
+    .prepare(`insert_log_entries_${count}`),
+);
 
 /**
  * POST /api/v1/logs: records one post of training at most once per Idempotency-Key. Entries are
  * stored as posted; sessions are merged per (athlete, rung, date) when read.
  */
 export function createLog(actor: Actor, key: string, input: CreateLog): Promise<Response> {
-  return withIdempotency({ ownerId: actor.userId, scope: CREATE_LOG_SCOPE, key, body: input, status: 201 }, (tx) =>
-    writeLog(tx, actor, input),
+  const athleteId = logAthleteOf(actor, input.athleteId);
+  const rungIds = input.entries.map((e) => e.rungId);
+  return withIdempotency(
+    { ownerId: actor.userId, scope: CREATE_LOG_SCOPE, key, body: input, status: 201 },
+    {
+      read: (tx, keyHeld) => lockPlacedRungs(tx, actor.teamId, athleteId, rungIds, keyHeld),
+      write: (tx, placed) => writeLog(tx, actor, { ...input, athleteId }, placed),
+    },
   );
 }
 
 /**
- * Validates against the team's rungs and the athlete's positions (locking those, so the verdicts
- * that follow are computed under the lock), then writes the log and its entries and evaluates.
+ * Validates against the team's rungs and the athlete's positions (locked by the read that went out
+ * with the key's claim, so the verdicts that follow are computed under the lock), then writes the
+ * log and its entries and reads the positions' contexts in one trip, and evaluates. The figures
+ * updates go out last, with the stored answer.
  */
-export async function writeLog(tx: Tx, actor: Actor, input: CreateLog): Promise<LogWithVerdicts> {
+async function writeLog(
+  tx: Tx,
+  actor: Actor,
+  input: CreateLog & { athleteId: string },
+  placed: Map<string, LogRung>,
+): Promise<{ value: LogWithVerdicts; last: () => Promise<unknown>[] }> {
   assertLoggableDate(input.performedOn, actor.timeZone);
-  const athleteId = logAthleteOf(actor, input.athleteId);
-  const rungList = await logRungsOf(
-    tx,
-    actor.teamId,
-    athleteId,
-    input.entries.map((e) => e.rungId),
-  );
+  const { athleteId } = input;
+  const rungList = await placedOrThrow(tx, actor.teamId, athleteId, input.entries.map((e) => e.rungId), placed);
   const prepared = input.entries.map((entry, i) => {
     const rung = rungList[i]!;
     const sets = checkSets(rung.measure, entry.sets, `entries.${i}.sets`);
@@ -50,21 +101,29 @@ export async function writeLog(tx: Tx, actor: Actor, input: CreateLog): Promise<
     };
   });
 
-  const [log] = await tx
-    .insert(logs)
-    .values({
+  // The id is made here so the entries can go out in the same trip as their log.
+  const logId = randomUUID();
+  const [[log], entries, ...contexts] = await oneTrip(tx, () => [
+    insertLog(tx).execute({
+      id: logId,
       teamId: actor.teamId,
       athleteId,
       performedOn: input.performedOn,
       durationMinutes: input.durationMinutes ?? null,
       sessionRpe: input.sessionRpe ?? null,
       enteredById: actor.userId,
-    })
-    .returning();
-  const entries = await tx
-    .insert(logEntries)
-    .values(prepared.map((e) => ({ ...e, teamId: actor.teamId, logId: log!.id, athleteId, performedOn: input.performedOn })))
-    .returning();
-  const verdicts = await evaluateAfterLog(tx, actor, { positionIds: currentPositions(rungList), logId: log!.id });
-  return { ...toLogDto(log!, entries), verdicts };
+    }),
+    insertEntries(tx, prepared.length).execute(
+      Object.fromEntries([
+        ["teamId", actor.teamId],
+        ["logId", logId],
+        ["athleteId", athleteId],
+        ["performedOn", input.performedOn],
+        ...prepared.flatMap((e, i) => Object.entries(e).map(([field, value]) => [`${field}${i}`, value])),
+      ]),
+    ),
+    ...currentPositions(rungList).map((positionId) => loadPositionContext(tx, { positionId, teamId: actor.teamId })),
+  ] as const);
+  const { verdicts, figures } = await evaluateLoaded(tx, actor, { contexts, logId });
+  return { value: { ...toLogDto(log!, entries), verdicts }, last: figures };
 }

@@ -1,6 +1,8 @@
 import "server-only";
 import { and, asc, eq, sql } from "drizzle-orm";
-import type { Queryable, Tx } from "@/db/client";
+import type { Db, Queryable, Tx } from "@/db/client";
+import { preparedVariants } from "@/db/prepared";
+import { keyLock } from "@/lib/server/http/idempotency";
 import { athletePositions, athletes, rungs } from "@/db/schema";
 import type { Measure } from "@/lib/engine/types";
 import { NotFound, Unprocessable, type FieldIssue } from "@/lib/errors";
@@ -15,14 +17,9 @@ export interface LogRung {
   isCurrent: boolean;
 }
 
-/**
- * Locks the athlete's positions on the ladders of these rungs (FOR UPDATE, in ladder-id order, the
- * order every writer uses, so two transactions can never deadlock) and returns the rungs found on
- * those ladders. Read under the lock, `isCurrent` already reflects any concurrent promotion. One
- * named statement on the hot logging path.
- */
-export async function lockPlacedRungs(tx: Tx, teamId: string, athleteId: string, rungIds: readonly string[]): Promise<Map<string, LogRung>> {
-  const rows = await tx
+/** Rungs of the team among `rungIds`, joined to the athlete's positions on their ladders, locked. */
+const placedRungs = preparedVariants((database: Db, variant: "always" | "while_key_held") =>
+  database
     .select({
       rungId: rungs.id,
       ladderId: rungs.ladderId,
@@ -33,13 +30,44 @@ export async function lockPlacedRungs(tx: Tx, teamId: string, athleteId: string,
     .from(rungs)
     .innerJoin(
       athletePositions,
-      and(eq(athletePositions.ladderId, rungs.ladderId), eq(athletePositions.athleteId, athleteId), eq(athletePositions.teamId, teamId)),
+      and(
+        eq(athletePositions.ladderId, rungs.ladderId),
+        eq(athletePositions.athleteId, sql.placeholder("athleteId")),
+        eq(athletePositions.teamId, sql.placeholder("teamId")),
+      ),
     )
-    .where(and(sql`${rungs.id} = any(${sql.param([...new Set(rungIds)])}::uuid[])`, eq(rungs.teamId, teamId)))
+    .where(
+      and(
+        sql`${rungs.id} = any(${sql.placeholder("rungIds")}::uuid[])`,
+        eq(rungs.teamId, sql.placeholder("teamId")),
+        variant === "while_key_held" ? keyLock : undefined,
+      ),
+    )
     .orderBy(asc(athletePositions.ladderId))
     .for("update", { of: athletePositions })
-    .prepare("lock_placed_rungs")
-    .execute();
+    .prepare(`lock_placed_rungs_${variant}`),
+);
+
+/**
+ * Locks the athlete's positions on the ladders of these rungs (FOR UPDATE, in ladder-id order, the
+ * order every writer uses, so two transactions can never deadlock) and returns the rungs found on
+ * those ladders. Read under the lock, `isCurrent` already reflects any concurrent promotion. With
+ * an Idempotency-Key's `lockKey`, nothing is locked (or returned) unless this transaction holds
+ * that key (see withIdempotency). Submits synchronously, so it can travel in a oneTrip.
+ */
+export async function lockPlacedRungs(
+  tx: Tx,
+  teamId: string,
+  athleteId: string,
+  rungIds: readonly string[],
+  lockKey?: string,
+): Promise<Map<string, LogRung>> {
+  const rows = await placedRungs(tx, lockKey === undefined ? "always" : "while_key_held").execute({
+    teamId,
+    athleteId,
+    rungIds: [...new Set(rungIds)],
+    lockKey,
+  });
   return new Map(
     rows.map((r) => [r.rungId, { rungId: r.rungId, ladderId: r.ladderId, measure: r.measure, positionId: r.positionId, isCurrent: r.currentRungId === r.rungId }]),
   );
@@ -59,7 +87,18 @@ export async function logRungsOf(
   rungIds: readonly string[],
   path = "entries",
 ): Promise<LogRung[]> {
-  const placed = await lockPlacedRungs(tx, teamId, athleteId, rungIds);
+  return placedOrThrow(tx, teamId, athleteId, rungIds, await lockPlacedRungs(tx, teamId, athleteId, rungIds), path);
+}
+
+/** The rungs in the order named when all were found placed (see logRungsOf); otherwise the error. */
+export async function placedOrThrow(
+  tx: Tx,
+  teamId: string,
+  athleteId: string,
+  rungIds: readonly string[],
+  placed: Map<string, LogRung>,
+  path = "entries",
+): Promise<LogRung[]> {
   if (rungIds.every((id) => placed.has(id))) return rungIds.map((id) => placed.get(id)!);
   throw await whyNotPlaced(tx, teamId, athleteId, rungIds, placed, path);
 }

@@ -2,7 +2,10 @@ import "server-only";
 import type { Tx } from "@/db/client";
 import type { Actor } from "@/lib/server/actor";
 import type { VerdictDto } from "@/lib/validation/verdicts";
-import { evaluatePosition } from "./evaluate-position";
+import { oneTrip } from "@/db/one-trip";
+import { NotFound } from "@/lib/errors";
+import { evaluateContext, type Evaluation } from "./evaluate-position";
+import { loadPositionContext, type PositionContext } from "./load-position-context";
 
 /**
  * Called by the log operations inside the log's transaction, after the entries are written and
@@ -20,9 +23,32 @@ export async function evaluateAfterLog(
   input: { positionIds: string[]; logId: string },
   asOf: Date = new Date(),
 ): Promise<VerdictDto[]> {
-  const verdicts: VerdictDto[] = [];
-  for (const positionId of input.positionIds) {
-    verdicts.push(await evaluatePosition(tx, { positionId, asOf, actor, logId: input.logId, locked: true }));
-  }
+  const contexts = await oneTrip(tx, () => input.positionIds.map((positionId) => loadPositionContext(tx, { positionId, teamId: actor.teamId })));
+  const { verdicts, figures } = await evaluateLoaded(tx, actor, { contexts, logId: input.logId }, asOf);
+  await oneTrip(tx, figures);
   return verdicts;
+}
+
+/**
+ * evaluateAfterLog for contexts the caller read itself (createLog reads them in the same trip as
+ * its inserts). Returns the verdicts, and the figures updates for the caller to send.
+ */
+export async function evaluateLoaded(
+  tx: Tx,
+  actor: Actor,
+  input: { contexts: readonly (PositionContext | null)[]; logId: string },
+  asOf: Date = new Date(),
+): Promise<{ verdicts: VerdictDto[]; figures: () => Promise<unknown>[] }> {
+  const evaluations: Evaluation[] = [];
+  let moved = false;
+  for (const loaded of input.contexts) {
+    if (!loaded) throw new NotFound("position");
+    // A move on one ladder can reach a prerequisite of another: read the rest afresh after one.
+    const ctx: PositionContext | null = moved ? await loadPositionContext(tx, { positionId: loaded.position.id, teamId: actor.teamId }) : loaded;
+    if (!ctx) throw new NotFound("position");
+    const evaluation = await evaluateContext(tx, ctx, { asOf, actor, logId: input.logId, locked: true });
+    if (evaluation.verdict.promotedTo !== null || (evaluation.verdict.achieved === true && ctx.position.achievedAt === null)) moved = true;
+    evaluations.push(evaluation);
+  }
+  return { verdicts: evaluations.map((e) => e.verdict), figures: () => evaluations.map((e) => e.figures()) };
 }

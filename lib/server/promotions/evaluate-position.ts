@@ -1,6 +1,7 @@
 import "server-only";
-import { eq } from "drizzle-orm";
-import type { Tx } from "@/db/client";
+import { eq, sql } from "drizzle-orm";
+import type { Db, Tx } from "@/db/client";
+import { preparedOnce } from "@/db/prepared";
 import { athletePositions } from "@/db/schema";
 import { NotFound } from "@/lib/errors";
 import type { Actor } from "@/lib/server/actor";
@@ -56,23 +57,36 @@ export async function evaluatePosition(tx: Tx, input: EvaluatePositionInput): Pr
   const teamId = input.actor === "system" ? undefined : input.actor.teamId;
   const ctx = await loadPositionContext(tx, { positionId: input.positionId, teamId, lock: !input.locked });
   if (!ctx) throw new NotFound("position");
-  const judged = judgePosition(ctx, input.asOf);
-  const outcome = await act(tx, ctx, judged, input);
-
-  if (outcome.promotedTo) {
-    // The athlete is on a new rung: its figures start from the evidence there (usually none yet).
-    const moved = await loadPositionContext(tx, { positionId: ctx.position.id });
-    if (moved) {
-      const fresh = judgePosition(moved, input.asOf);
-      await writeFigures(tx, moved, fresh, { ...outcome, pendingDirection: moved.pending?.direction ?? null, achieved: false });
-    }
-  } else {
-    await writeFigures(tx, ctx, judged, outcome);
-  }
-  return toVerdictDto({ ladderId: ctx.ladder.id, rungId: ctx.rung.id }, judged.verdict, judged.explanation, outcome);
+  const { verdict, figures } = await evaluateContext(tx, ctx, input);
+  await figures();
+  return verdict;
 }
 
-async function act(tx: Tx, ctx: PositionContext, judged: Judgement, input: EvaluatePositionInput): Promise<Outcome> {
+export interface Evaluation {
+  verdict: VerdictDto;
+  /** Sends the position's derived-figures update (submits synchronously; see oneTrip). */
+  figures: () => Promise<unknown>;
+}
+
+/**
+ * evaluatePosition for a context the caller read under the position's lock: judges, acts on the
+ * verdict, and leaves the figures update to the caller, who may send it with its own last statements.
+ */
+export async function evaluateContext(tx: Tx, ctx: PositionContext, input: Omit<EvaluatePositionInput, "positionId">): Promise<Evaluation> {
+  const judged = judgePosition(ctx, input.asOf);
+  const outcome = await act(tx, ctx, judged, input);
+  const verdict = toVerdictDto({ ladderId: ctx.ladder.id, rungId: ctx.rung.id }, judged.verdict, judged.explanation, outcome);
+  if (!outcome.promotedTo) return { verdict, figures: () => writeFigures(tx, ctx, judged, outcome) };
+
+  // The athlete is on a new rung: its figures start from the evidence there (usually none yet).
+  const moved = await loadPositionContext(tx, { positionId: ctx.position.id });
+  if (!moved) return { verdict, figures: () => Promise.resolve() };
+  const fresh = judgePosition(moved, input.asOf);
+  const movedOutcome = { ...outcome, pendingDirection: moved.pending?.direction ?? null, achieved: false };
+  return { verdict, figures: () => writeFigures(tx, moved, fresh, movedOutcome) };
+}
+
+async function act(tx: Tx, ctx: PositionContext, judged: Judgement, input: Omit<EvaluatePositionInput, "positionId">): Promise<Outcome> {
   const none: Outcome = { promotedTo: null, pendingPromotionId: null, pendingDirection: null, achieved: ctx.position.achievedAt !== null };
   if (ctx.position.achievedAt) return none;
   // Read under the position lock: a proposal waits, so nothing new is proposed or applied.
@@ -126,6 +140,8 @@ async function propose(tx: Tx, ctx: PositionContext, draft: PromotionDraft): Pro
   return pending.id;
 }
 
+type PositionStatus = typeof athletePositions.$inferSelect.status;
+
 /** The figures the coach's tables sort and filter on, from the latest verdict and proposal. */
 async function writeFigures(tx: Tx, ctx: PositionContext, judged: Judgement, outcome: Outcome): Promise<void> {
   const { verdict } = judged;
@@ -136,16 +152,26 @@ async function writeFigures(tx: Tx, ctx: PositionContext, judged: Judgement, out
       : outcome.pendingDirection === "down"
         ? ("step_down" as const)
         : verdict.status;
-  await tx
+  await positionFigures(tx).execute({
+    id: ctx.position.id,
+    readiness: outcome.achieved ? 100 : verdict.readiness,
+    status,
+    lastSessionOn: verdict.lastSessionDate,
+    lastPainOn: judged.lastPainOn,
+    sessionsMet: verdict.sessionsMet,
+  });
+}
+
+const positionFigures = preparedOnce((database: Db) =>
+  database
     .update(athletePositions)
     .set({
-      readiness: outcome.achieved ? 100 : verdict.readiness,
-      status,
-      lastSessionOn: verdict.lastSessionDate,
-      lastPainOn: judged.lastPainOn,
-      sessionsMet: verdict.sessionsMet,
+      readiness: sql<number>`${sql.placeholder("readiness")}`,
+      status: sql<PositionStatus>`${sql.placeholder("status")}`,
+      lastSessionOn: sql<string | null>`${sql.placeholder("lastSessionOn")}`,
+      lastPainOn: sql<string | null>`${sql.placeholder("lastPainOn")}`,
+      sessionsMet: sql<number>`${sql.placeholder("sessionsMet")}`,
     })
-    .where(eq(athletePositions.id, ctx.position.id))
-    .prepare("position_figures")
-    .execute();
-}
+    .where(eq(athletePositions.id, sql.placeholder("id")))
+    .prepare("position_figures"),
+);

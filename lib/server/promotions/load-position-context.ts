@@ -1,6 +1,7 @@
 import "server-only";
 import { and, eq, sql } from "drizzle-orm";
-import type { Queryable } from "@/db/client";
+import type { Db, Queryable } from "@/db/client";
+import { preparedVariants } from "@/db/prepared";
 import { athletePositions, athletes, ladders, rungs, standards, teams } from "@/db/schema";
 import type { Measure, PrerequisiteState, PromotionMode, Session, Standard } from "@/lib/engine";
 import { standardOf } from "./standard-of";
@@ -87,30 +88,18 @@ const pendingProposal = sql<PositionContext["pending"]>`(
   select json_build_object('id', p.id, 'direction', p.direction) from promotions p
   where p.position_id = ${athletePositions.id} and p.status = 'pending' limit 1)`;
 
-/**
- * Reads one position with its ladder, rung, standard, neighbours, prerequisites, pending proposal
- * and the entries on its rung in one named statement (the logging path runs it on every log). `teamId` scopes the
- * read for a caller acting for a team; the system (daily job, seed) passes none. With `lock`, the
- * position row is locked FOR UPDATE first, in its own statement, so this read (a fresh snapshot)
- * sees every move committed before the lock was granted.
- */
-export async function loadPositionContext(
-  q: Queryable,
-  options: { positionId: string; teamId?: string; lock?: boolean },
-): Promise<PositionContext | null> {
-  const scope = and(eq(athletePositions.id, options.positionId), options.teamId ? eq(athletePositions.teamId, options.teamId) : undefined);
-  const variant = options.teamId ? "team" : "system";
-  if (options.lock) {
-    const [locked] = await q
-      .select({ id: athletePositions.id })
-      .from(athletePositions)
-      .where(scope)
-      .for("update")
-      .prepare(`lock_position_${variant}`)
-      .execute();
-    if (!locked) return null;
-  }
-  const [row] = await q
+type Scope = "team" | "system";
+
+/** The position, of the team when a person asks; the system (daily job, seed) reads any. */
+const positionScope = (scope: Scope) =>
+  and(eq(athletePositions.id, sql.placeholder("positionId")), scope === "team" ? eq(athletePositions.teamId, sql.placeholder("teamId")) : undefined);
+
+const lockPosition = preparedVariants((database: Db, scope: Scope) =>
+  database.select({ id: athletePositions.id }).from(athletePositions).where(positionScope(scope)).for("update").prepare(`lock_position_${scope}`),
+);
+
+const contextOf = preparedVariants((database: Db, scope: Scope) =>
+  database
     .select({
       position: {
         id: athletePositions.id,
@@ -139,9 +128,29 @@ export async function loadPositionContext(
     .innerJoin(rungs, eq(rungs.id, athletePositions.rungId))
     .innerJoin(teams, eq(teams.id, athletePositions.teamId))
     .leftJoin(standards, eq(standards.rungId, rungs.id))
-    .where(scope)
-    .prepare(`position_context_${variant}`)
-    .execute();
+    .where(positionScope(scope))
+    .prepare(`position_context_${scope}`),
+);
+
+/**
+ * Reads one position with its ladder, rung, standard, neighbours, prerequisites, pending proposal
+ * and the entries on its rung in one named statement, built once (the logging path runs it on every
+ * log). `teamId` scopes the read for a caller acting for a team; the system (daily job, seed) passes
+ * none. With `lock`, the position row is locked FOR UPDATE first, in its own statement, so this read
+ * (a fresh snapshot) sees every move committed before the lock was granted; without, it submits
+ * synchronously, so it can travel in a oneTrip.
+ */
+export async function loadPositionContext(
+  q: Queryable,
+  options: { positionId: string; teamId?: string; lock?: boolean },
+): Promise<PositionContext | null> {
+  const scope = options.teamId ? "team" : "system";
+  const values = { positionId: options.positionId, teamId: options.teamId };
+  if (options.lock) {
+    const [locked] = await lockPosition(q, scope).execute(values);
+    if (!locked) return null;
+  }
+  const [row] = await contextOf(q, scope).execute(values);
   if (!row) return null;
 
   const hasStandard = row.standard !== null && row.standard.sets !== null;
