@@ -7,6 +7,7 @@ import fs from "node:fs";
 import net from "node:net";
 import os from "node:os";
 import path from "node:path";
+import { serverEnv } from "../lib/app.mjs";
 
 const stoppers = [];
 export async function shutdown() {
@@ -85,7 +86,7 @@ export async function build(root, env) {
 export async function startApp(root, env, port) {
   const child = spawn(bin(root, "next"), ["start", "-H", "127.0.0.1", "-p", String(port)], {
     cwd: root,
-    env,
+    env: serverEnv(env),
     stdio: ["ignore", "ignore", "inherit"],
     detached: true,
   });

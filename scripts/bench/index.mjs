@@ -37,7 +37,6 @@ async function main() {
     NEXT_TELEMETRY_DISABLED: "1",
     NEXT_DIST_DIR: DIST_DIR,
     DATABASE_URL: pgInfo.url,
-    DATABASE_POOL_SIZE: "20",
     AUTH_SECRET: secret(),
     AUTH_TRUST_HOST: "true",
     APP_URL: `http://127.0.0.1:${port}`,

@@ -152,6 +152,19 @@ async function replays(baseUrl, dbUrl, world, candidates) {
   };
 }
 
+/**
+ * Between runs: vacuum and checkpoint, so a run does not pay for the dead rows and dirty pages the
+ * one before it left (the floor deletes its tens of thousands of rows; autovacuum would start on
+ * them in the middle of the next run).
+ */
+async function settle(dbUrl) {
+  const c = new pg.Client({ connectionString: dbUrl });
+  await c.connect();
+  await c.query("vacuum analyze");
+  await c.query("checkpoint");
+  await c.end();
+}
+
 /** One request at a time: the latency of the request path itself, without queueing. */
 async function sequential(baseUrl, world, date, count = 30) {
   const latencies = [];
@@ -183,8 +196,11 @@ export async function logBench({ baseUrl, dbUrl, seconds }) {
   const sample = [];
   // Warm the route (first compile of lazy chunks, pools) so it does not count against the runs.
   await hammer(baseUrl, world, { seconds: 3, connections: 10, date }, []);
+  await settle(dbUrl);
   const floorResult = await floor(dbUrl, world, seconds);
+  await settle(dbUrl);
   const saturated = await hammer(baseUrl, world, { seconds, connections: 50, date }, sample);
+  await settle(dbUrl);
   const fixed = await hammer(baseUrl, world, { seconds, connections: 10, rate: 200, date }, sample);
   const replay = await replays(baseUrl, dbUrl, world, sample);
   const ratio = saturated.rps / floorResult.rps;

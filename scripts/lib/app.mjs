@@ -96,7 +96,18 @@ export async function buildApp(root, env, { title = "Next build" } = {}) {
   return result.code === 0;
 }
 
+/**
+ * Node options for the production server: a larger young generation, so a busy server collects
+ * short-lived request garbage less often ("may improve throughput … at the cost of more memory",
+ * Node.js CLI docs on --max-semi-space-size). The bench starts the app with the same options.
+ */
+export const SERVER_NODE_OPTIONS = "--max-semi-space-size=32";
+
+export function serverEnv(env) {
+  return { ...env, NODE_OPTIONS: [env.NODE_OPTIONS, SERVER_NODE_OPTIONS].filter(Boolean).join(" ") };
+}
+
 export function startNext(root, env, { dev = false, port, output = "prefix" }) {
   const args = [dev ? "dev" : "start", "-p", String(port), "-H", "127.0.0.1"];
-  return spawnTracked("app", bin(root, "next"), args, { cwd: root, env, output });
+  return spawnTracked("app", bin(root, "next"), args, { cwd: root, env: dev ? env : serverEnv(env), output });
 }
