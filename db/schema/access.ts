@@ -1,16 +1,14 @@
 import { check, index, integer, jsonb, pgEnum, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
 import { sql } from "drizzle-orm";
 import { createdAt, id } from "./columns";
-import { athletes, teams, users } from "./teams";
+import { athletes, teamRef, users } from "./teams";
 
 /** Personal API tokens: only a SHA-256 of the token is kept; the token is shown once. */
 export const apiTokens = pgTable(
   "api_tokens",
   {
     id: id(),
-    teamId: uuid("team_id")
-      .notNull()
-      .references(() => teams.id, { onDelete: "cascade" }),
+    teamId: teamRef(),
     userId: uuid("user_id")
       .notNull()
       .references(() => users.id, { onDelete: "cascade" }),
@@ -32,9 +30,7 @@ export const invites = pgTable(
   "invites",
   {
     id: id(),
-    teamId: uuid("team_id")
-      .notNull()
-      .references(() => teams.id, { onDelete: "cascade" }),
+    teamId: teamRef(),
     email: text("email").notNull(),
     role: inviteRoleEnum("role").notNull(),
     athleteId: uuid("athlete_id").references(() => athletes.id, { onDelete: "cascade" }),
@@ -106,9 +102,7 @@ export const auditEvents = pgTable(
   "audit_events",
   {
     id: id(),
-    teamId: uuid("team_id")
-      .notNull()
-      .references(() => teams.id, { onDelete: "cascade" }),
+    teamId: teamRef(),
     actorUserId: uuid("actor_user_id").references(() => users.id, { onDelete: "set null" }),
     /** "system" for the engine and jobs, else the person. */
     actorKind: text("actor_kind").notNull().default("user"),

@@ -1,7 +1,7 @@
 import { sql } from "drizzle-orm";
 import { boolean, check, index, integer, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
 import { createdAt, id, updatedAt } from "./columns";
-import { athletes, teams } from "./teams";
+import { athletes, teamRef, teams } from "./teams";
 
 /** Team-wide billing settings; a team without a row uses the defaults. */
 export const billingSettings = pgTable(
@@ -22,9 +22,7 @@ export const billingOffers = pgTable(
   "billing_offers",
   {
     id: id(),
-    teamId: uuid("team_id")
-      .notNull()
-      .references(() => teams.id, { onDelete: "cascade" }),
+    teamId: teamRef(),
     name: text("name").notNull(),
     priceMinor: integer("price_minor").notNull(),
     currency: text("currency").notNull(),
@@ -48,9 +46,7 @@ export const billingSubscriptions = pgTable(
   "billing_subscriptions",
   {
     id: id(),
-    teamId: uuid("team_id")
-      .notNull()
-      .references(() => teams.id, { onDelete: "cascade" }),
+    teamId: teamRef(),
     athleteId: uuid("athlete_id")
       .notNull()
       .references(() => athletes.id, { onDelete: "cascade" }),
@@ -82,9 +78,7 @@ export const billingPayments = pgTable(
   "billing_payments",
   {
     invoiceId: text("invoice_id").primaryKey(),
-    teamId: uuid("team_id")
-      .notNull()
-      .references(() => teams.id, { onDelete: "cascade" }),
+    teamId: teamRef(),
     subscriptionId: uuid("subscription_id")
       .notNull()
       .references(() => billingSubscriptions.id, { onDelete: "cascade" }),

@@ -3,7 +3,7 @@ import { bigint, check, doublePrecision, index, integer, pgEnum, pgTable, text, 
 import { createdAt, id } from "./columns";
 import { rungs } from "./ladders";
 import { logs } from "./logs";
-import { athletes, teams, users } from "./teams";
+import { athletes, teamRef, users } from "./teams";
 
 export const uploadStateEnum = pgEnum("upload_state", ["pending", "complete", "rejected"]);
 
@@ -16,9 +16,7 @@ export const uploads = pgTable(
   "uploads",
   {
     id: id(),
-    teamId: uuid("team_id")
-      .notNull()
-      .references(() => teams.id, { onDelete: "cascade" }),
+    teamId: teamRef(),
     athleteId: uuid("athlete_id")
       .notNull()
       .references(() => athletes.id, { onDelete: "cascade" }),
@@ -48,9 +46,7 @@ export const formChecks = pgTable(
   "form_checks",
   {
     id: id(),
-    teamId: uuid("team_id")
-      .notNull()
-      .references(() => teams.id, { onDelete: "cascade" }),
+    teamId: teamRef(),
     athleteId: uuid("athlete_id")
       .notNull()
       .references(() => athletes.id, { onDelete: "cascade" }),
@@ -77,9 +73,7 @@ export const formCheckComments = pgTable(
   "form_check_comments",
   {
     id: id(),
-    teamId: uuid("team_id")
-      .notNull()
-      .references(() => teams.id, { onDelete: "cascade" }),
+    teamId: teamRef(),
     formCheckId: uuid("form_check_id")
       .notNull()
       .references(() => formChecks.id, { onDelete: "cascade" }),

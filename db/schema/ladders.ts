@@ -18,7 +18,7 @@ import {
 } from "drizzle-orm/pg-core";
 import type { StepDownRule } from "../../lib/engine/types";
 import { createdAt, id, updatedAt } from "./columns";
-import { athletes, teams } from "./teams";
+import { athletes, teamRef } from "./teams";
 
 export const promotionModeEnum = pgEnum("promotion_mode", ["auto", "approve"]);
 export const measureEnum = pgEnum("measure", [
@@ -35,9 +35,7 @@ export const ladders = pgTable(
   "ladders",
   {
     id: id(),
-    teamId: uuid("team_id")
-      .notNull()
-      .references(() => teams.id, { onDelete: "cascade" }),
+    teamId: teamRef(),
     name: text("name").notNull(),
     targetSkill: text("target_skill").notNull(),
     notes: text("notes"),
@@ -61,9 +59,7 @@ export const rungs = pgTable(
   "rungs",
   {
     id: id(),
-    teamId: uuid("team_id")
-      .notNull()
-      .references(() => teams.id, { onDelete: "cascade" }),
+    teamId: teamRef(),
     ladderId: uuid("ladder_id")
       .notNull()
       .references(() => ladders.id, { onDelete: "cascade" }),
@@ -91,9 +87,7 @@ export const rungs = pgTable(
 export const rungPrerequisites = pgTable(
   "rung_prerequisites",
   {
-    teamId: uuid("team_id")
-      .notNull()
-      .references(() => teams.id, { onDelete: "cascade" }),
+    teamId: teamRef(),
     rungId: uuid("rung_id")
       .notNull()
       .references(() => rungs.id, { onDelete: "cascade" }),
@@ -114,9 +108,7 @@ export const standards = pgTable(
     rungId: uuid("rung_id")
       .primaryKey()
       .references(() => rungs.id, { onDelete: "cascade" }),
-    teamId: uuid("team_id")
-      .notNull()
-      .references(() => teams.id, { onDelete: "cascade" }),
+    teamId: teamRef(),
     sets: integer("sets").notNull(),
     minValue: doublePrecision("min_value").notNull(),
     minReps: integer("min_reps"),
@@ -158,9 +150,7 @@ export const athletePositions = pgTable(
   "athlete_positions",
   {
     id: id(),
-    teamId: uuid("team_id")
-      .notNull()
-      .references(() => teams.id, { onDelete: "cascade" }),
+    teamId: teamRef(),
     athleteId: uuid("athlete_id")
       .notNull()
       .references(() => athletes.id, { onDelete: "cascade" }),

@@ -3,16 +3,14 @@ import { boolean, check, date, doublePrecision, index, integer, jsonb, pgTable, 
 import type { SetEntry } from "../../lib/engine/types";
 import { createdAt, id, updatedAt } from "./columns";
 import { ladders, rungs } from "./ladders";
-import { athletes, teams, users } from "./teams";
+import { athletes, teamRef, users } from "./teams";
 
 /** One post of training: what an athlete did on a date (entered by them or by a coach). */
 export const logs = pgTable(
   "logs",
   {
     id: id(),
-    teamId: uuid("team_id")
-      .notNull()
-      .references(() => teams.id, { onDelete: "cascade" }),
+    teamId: teamRef(),
     athleteId: uuid("athlete_id")
       .notNull()
       .references(() => athletes.id, { onDelete: "cascade" }),
@@ -41,9 +39,7 @@ export const logEntries = pgTable(
   "log_entries",
   {
     id: id(),
-    teamId: uuid("team_id")
-      .notNull()
-      .references(() => teams.id, { onDelete: "cascade" }),
+    teamId: teamRef(),
     logId: uuid("log_id")
       .notNull()
       .references(() => logs.id, { onDelete: "cascade" }),

@@ -1,7 +1,7 @@
 import { sql } from "drizzle-orm";
 import { bigserial, boolean, check, date, index, jsonb, pgTable, smallint, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
 import { createdAt, updatedAt } from "./columns";
-import { teams } from "./teams";
+import { teamRef, teams } from "./teams";
 
 /**
  * What mail a person wants, keyed by address: an athlete record without a sign-in still has an
@@ -11,9 +11,7 @@ export const notificationPreferences = pgTable(
   "notification_preferences",
   {
     email: text("email").primaryKey(),
-    teamId: uuid("team_id")
-      .notNull()
-      .references(() => teams.id, { onDelete: "cascade" }),
+    teamId: teamRef(),
     promotionNotices: boolean("promotion_notices").notNull().default(true),
     approvalNotices: boolean("approval_notices").notNull().default(true),
     weeklyDigest: boolean("weekly_digest").notNull().default(true),
@@ -70,9 +68,7 @@ export const usedMailLinks = pgTable("used_mail_links", {
 export const dailyEvaluations = pgTable(
   "daily_evaluations",
   {
-    teamId: uuid("team_id")
-      .notNull()
-      .references(() => teams.id, { onDelete: "cascade" }),
+    teamId: teamRef(),
     localDate: date("local_date", { mode: "string" }).notNull(),
     result: jsonb("result").notNull().default({}),
     createdAt: createdAt(),

@@ -3,7 +3,7 @@ import { date, index, jsonb, pgEnum, pgTable, text, timestamp, uniqueIndex, uuid
 import { createdAt, id } from "./columns";
 import { athletePositions, ladders, rungs } from "./ladders";
 import { logs } from "./logs";
-import { athletes, teams, users } from "./teams";
+import { athletes, teamRef, users } from "./teams";
 
 export const promotionStatusEnum = pgEnum("promotion_status", ["pending", "approved", "declined", "auto"]);
 export const moveDirectionEnum = pgEnum("move_direction", ["up", "down"]);
@@ -16,9 +16,7 @@ export const promotions = pgTable(
   "promotions",
   {
     id: id(),
-    teamId: uuid("team_id")
-      .notNull()
-      .references(() => teams.id, { onDelete: "cascade" }),
+    teamId: teamRef(),
     athleteId: uuid("athlete_id")
       .notNull()
       .references(() => athletes.id, { onDelete: "cascade" }),
@@ -60,9 +58,7 @@ export const positionMoves = pgTable(
   "position_moves",
   {
     id: id(),
-    teamId: uuid("team_id")
-      .notNull()
-      .references(() => teams.id, { onDelete: "cascade" }),
+    teamId: teamRef(),
     athleteId: uuid("athlete_id")
       .notNull()
       .references(() => athletes.id, { onDelete: "cascade" }),

@@ -14,14 +14,18 @@ export const teams = pgTable("teams", {
   updatedAt: updatedAt(),
 });
 
+/** The team a row belongs to: every team-owned table has one, and goes when its team goes. */
+export const teamRef = () =>
+  uuid("team_id")
+    .notNull()
+    .references(() => teams.id, { onDelete: "cascade" });
+
 /** A person who can sign in. One person belongs to one team, with one role. */
 export const users = pgTable(
   "users",
   {
     id: id(),
-    teamId: uuid("team_id")
-      .notNull()
-      .references(() => teams.id, { onDelete: "cascade" }),
+    teamId: teamRef(),
     email: text("email").notNull(),
     name: text("name").notNull(),
     role: roleEnum("role").notNull(),
@@ -45,9 +49,7 @@ export const athletes = pgTable(
   "athletes",
   {
     id: id(),
-    teamId: uuid("team_id")
-      .notNull()
-      .references(() => teams.id, { onDelete: "cascade" }),
+    teamId: teamRef(),
     name: text("name").notNull(),
     email: text("email"),
     userId: uuid("user_id").references(() => users.id, { onDelete: "set null" }),

@@ -2,16 +2,14 @@ import { sql } from "drizzle-orm";
 import { check, date, index, integer, pgTable, primaryKey, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
 import { createdAt, id, updatedAt } from "./columns";
 import { ladders } from "./ladders";
-import { athletes, teams, users } from "./teams";
+import { athletes, teamRef, users } from "./teams";
 
 /** A named group of athletes (a class, a level). An athlete may be in several. */
 export const squads = pgTable(
   "squads",
   {
     id: id(),
-    teamId: uuid("team_id")
-      .notNull()
-      .references(() => teams.id, { onDelete: "cascade" }),
+    teamId: teamRef(),
     name: text("name").notNull(),
     description: text("description"),
     archivedAt: timestamp("archived_at", { withTimezone: true }),
@@ -24,9 +22,7 @@ export const squads = pgTable(
 export const squadMembers = pgTable(
   "squad_members",
   {
-    teamId: uuid("team_id")
-      .notNull()
-      .references(() => teams.id, { onDelete: "cascade" }),
+    teamId: teamRef(),
     squadId: uuid("squad_id")
       .notNull()
       .references(() => squads.id, { onDelete: "cascade" }),
@@ -42,9 +38,7 @@ export const blocks = pgTable(
   "blocks",
   {
     id: id(),
-    teamId: uuid("team_id")
-      .notNull()
-      .references(() => teams.id, { onDelete: "cascade" }),
+    teamId: teamRef(),
     name: text("name").notNull(),
     rounds: integer("rounds").notNull(),
     restBetweenSlotsSec: integer("rest_between_slots_sec").notNull(),
@@ -66,9 +60,7 @@ export const blockSlots = pgTable(
   "block_slots",
   {
     id: id(),
-    teamId: uuid("team_id")
-      .notNull()
-      .references(() => teams.id, { onDelete: "cascade" }),
+    teamId: teamRef(),
     blockId: uuid("block_id")
       .notNull()
       .references(() => blocks.id, { onDelete: "cascade" }),
@@ -91,9 +83,7 @@ export const plans = pgTable(
   "plans",
   {
     id: id(),
-    teamId: uuid("team_id")
-      .notNull()
-      .references(() => teams.id, { onDelete: "cascade" }),
+    teamId: teamRef(),
     name: text("name").notNull(),
     weeks: integer("weeks").notNull(),
     warmUp: text("warm_up"),
@@ -109,9 +99,7 @@ export const plans = pgTable(
 export const planDayBlocks = pgTable(
   "plan_day_blocks",
   {
-    teamId: uuid("team_id")
-      .notNull()
-      .references(() => teams.id, { onDelete: "cascade" }),
+    teamId: teamRef(),
     planId: uuid("plan_id")
       .notNull()
       .references(() => plans.id, { onDelete: "cascade" }),
@@ -132,9 +120,7 @@ export const assignments = pgTable(
   "assignments",
   {
     id: id(),
-    teamId: uuid("team_id")
-      .notNull()
-      .references(() => teams.id, { onDelete: "cascade" }),
+    teamId: teamRef(),
     athleteId: uuid("athlete_id")
       .notNull()
       .references(() => athletes.id, { onDelete: "cascade" }),
