@@ -148,4 +148,19 @@ describe("who may log for whom", () => {
     const ranged = await call(athleteLogs, { token, params: { id }, path: `/api/v1/athletes/${id}/logs?from=${addDays(day, -1)}&to=${day}` });
     expect((ranged.data as unknown as { items: unknown[] }).items).toHaveLength(2);
   });
+
+  it("keeps a log's entries in the order they were posted", async () => {
+    const { teamId } = await createTeam({ timeZone: ZONE });
+    const me = await createMember(teamId, "athlete", "In Order");
+    const token = await bearerFor(me.actor);
+    const rung = await placeOn(teamId, me.actor.athleteId!, "freestanding-handstand", "chest-to-wall-hold");
+    // Six entries written by one statement: ordered by id alone they would come back shuffled.
+    const notes = ["first", "second", "third", "fourth", "fifth", "sixth"];
+    const entries = notes.map((note, i) => ({ rungId: rung.rungId, sets: [{ value: 10 + i }], pain: false, note }));
+    expect((await postLogAs(token, { performedOn: today(), entries })).status).toBe(201);
+    const id = me.actor.athleteId!;
+    const listed = await call(athleteLogs, { token, params: { id } });
+    const [log] = (listed.data as unknown as { items: { entries: { note: string }[] }[] }).items;
+    expect(log!.entries.map((e) => e.note)).toEqual(notes);
+  });
 });

@@ -35,7 +35,11 @@ const insertLog = preparedOnce((database: Db) =>
     .prepare("insert_log"),
 );
 
-/** One statement per number of entries (a log has a few), each prepared once. */
+/**
+ * One statement per number of entries (a log has a few), each prepared once. Rows written by one
+ * statement share now(); each entry gets a microsecond more than the one before, so lists ordered
+ * by `created_at` keep the order the entries were posted in.
+ */
 const insertEntries = preparedVariants((database: Db, count: number) =>
   database
     .insert(logEntries)
@@ -51,6 +55,7 @@ const insertEntries = preparedVariants((database: Db, count: number) =>
         bestValue: sql.placeholder(`bestValue${i}`),
         pain: sql.placeholder(`pain${i}`),
         note: sql.placeholder(`note${i}`),
+        createdAt: sql<Date>`now() + make_interval(secs => ${sql.raw(String(i))} / 1000000.0)`,
       })),
     )
     .returning()
@@ -67,7 +72,7 @@ export function createLog(actor: Actor, key: string, input: CreateLog): Promise<
   return withIdempotency(
     { ownerId: actor.userId, scope: CREATE_LOG_SCOPE, key, body: input, status: 201 },
     {
-      read: (tx, keyHeld) => lockPlacedRungs(tx, actor.teamId, athleteId, rungIds, keyHeld),
+      read: (tx, key) => lockPlacedRungs(tx, actor.teamId, athleteId, rungIds, key),
       write: (tx, placed) => writeLog(tx, actor, { ...input, athleteId }, placed),
     },
   );
