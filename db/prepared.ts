@@ -17,6 +17,10 @@ function connectionOf(q: Queryable): unknown {
  * transaction's connection. Drizzle prepares only on the database handle and rebuilds the SQL on
  * every call inside a transaction; for a short request that building is a large share of its time.
  * A variant key (an entry count, a scope) selects among shapes of one statement.
+ *
+ * Values Drizzle computes in JavaScript while building (`$onUpdate`, `$defaultFn`) are computed
+ * once, when the statement is built, and then reused: set such columns in SQL (`updatedAt:
+ * sql\`now()\``) in a statement built here.
  */
 export function preparedVariants<K extends string | number, R>(build: (db: Db, variant: K) => Prepared<R>): (q: Queryable, variant: K) => Prepared<R> {
   const built = new Map<K, Prepared<R>>();

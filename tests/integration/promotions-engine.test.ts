@@ -34,6 +34,24 @@ async function promotionsOf(positionId: string) {
   return db.select().from(promotions).where(eq(promotions.positionId, positionId));
 }
 
+describe("position figures", () => {
+  it("stamps updated_at with every evaluation, not with the time its statement was built", async () => {
+    const { teamId, owner } = await createTeam();
+    const athleteId = await createAthleteRecord(teamId, "Ida");
+    const ladder = await createTestLadder(teamId, { mode: "auto" });
+    const positionId = await placeAthlete(teamId, athleteId, ladder, ladder.rungIds[0]!, daysAgo(10));
+    const session = { teamId, athleteId, ladderId: ladder.ladderId, rungId: ladder.rungIds[0]!, sets: WEAK_SETS };
+
+    await logAndEvaluate(owner, { ...session, date: daysAgo(3) });
+    const first = (await positionRow(positionId)).updatedAt;
+    await new Promise((resolve) => setTimeout(resolve, 20));
+    await logAndEvaluate(owner, { ...session, date: daysAgo(2) });
+    const second = await positionRow(positionId);
+    expect(second.lastSessionOn).toBe(daysAgo(2));
+    expect(second.updatedAt.getTime()).toBeGreaterThan(first.getTime());
+  });
+});
+
 describe("auto promotion", () => {
   it("moves the athlete at once when the standard is met, with since = the meeting session's date", async () => {
     const { teamId, owner } = await createTeam();

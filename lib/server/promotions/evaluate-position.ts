@@ -171,6 +171,8 @@ const positionFigures = preparedOnce((database: Db) =>
       lastSessionOn: sql<string | null>`${sql.placeholder("lastSessionOn")}`,
       lastPainOn: sql<string | null>`${sql.placeholder("lastPainOn")}`,
       sessionsMet: sql<number>`${sql.placeholder("sessionsMet")}`,
+      // Spelled out: a statement built once would otherwise keep the time it was built at.
+      updatedAt: sql`now()`,
     })
     .where(eq(athletePositions.id, sql.placeholder("id")))
     .prepare("position_figures"),
