@@ -70,8 +70,19 @@ export async function transactionInTrips<T>(work: (tx: Tx) => Promise<TripsResul
       // Flushed after the work's first statements were submitted in this same tick.
       process.nextTick(() => socket?.uncork());
     }
-    const [, { value, last }] = await Promise.all([begun, worked]);
-    await oneTrip(tx, () => [...(last?.() ?? []), tx.execute(sql`commit`).execute()]);
+    // Both settle before anything else is sent: a rollback must not overtake the work's statements.
+    const [began, done] = await Promise.allSettled([begun, worked]);
+    if (began.status === "rejected") throw began.reason;
+    if (done.status === "rejected") throw done.reason;
+    const { value, last } = done.value;
+    await oneTrip(tx, () => {
+      const before = submitted(client);
+      const statements = last?.() ?? [];
+      // COMMIT goes out only when every last statement did: one that failed before it was sent (a
+      // missing placeholder, a value pg cannot serialize) would otherwise be left out of a commit.
+      if (submitted(client) - before !== statements.length) return [...statements, notAllSent(statements)];
+      return [...statements, tx.execute(sql`commit`).execute()];
+    });
     return value;
   } catch (error) {
     await tx
@@ -84,4 +95,16 @@ export async function transactionInTrips<T>(work: (tx: Tx) => Promise<TripsResul
   } finally {
     client.release(broken);
   }
+}
+
+/** Statements a pg client has accepted and not yet answered (queued, on the wire, or running). */
+function submitted(client: PoolClient): number {
+  const internals = client as unknown as { _queryQueue: unknown[]; _sentQueryQueue?: unknown[]; _activeQuery?: unknown };
+  return internals._queryQueue.length + (internals._sentQueryQueue?.length ?? 0) + (internals._activeQuery ? 1 : 0);
+}
+
+/** Rejects with the reason a statement of the last trip was not sent (the caller rolls back). */
+async function notAllSent(statements: Promise<unknown>[]): Promise<never> {
+  const failed = (await Promise.allSettled(statements)).find((s): s is PromiseRejectedResult => s.status === "rejected");
+  throw failed?.reason ?? new Error("A statement of the transaction's last trip was not sent; rolled back.");
 }
