@@ -66,11 +66,27 @@ describe("transactions in few trips", () => {
     expect(await keyExists(kept)).toBe(false);
   });
 
+  it("rolls back instead of committing when a last statement fails before it is sent", async () => {
+    const { owner } = await createTeam();
+    const [kept, unsent] = [newKey(), newKey()];
+    await expect(
+      transactionInTrips(async (tx) => {
+        await keyRow(tx).execute({ ownerId: owner.userId, key: kept });
+        // No value for the "key" placeholder: Drizzle rejects before anything reaches the wire.
+        return { value: null, last: () => [keyRow(tx).execute({ ownerId: owner.userId, key: unsent }), keyRow(tx).execute({ ownerId: owner.userId })] };
+      }),
+    ).rejects.toThrow(/placeholder/i);
+    expect(await keyExists(kept)).toBe(false);
+    expect(await keyExists(unsent)).toBe(false);
+  });
+
   it("skips the position locks at once while another transaction holds the Idempotency-Key", async () => {
     const { teamId } = await createTeam();
     const { actor } = await createMember(teamId, "athlete", "Trip Athlete");
     const rung = await placeOn(teamId, actor.athleteId!, "freestanding-handstand", "chest-to-wall-hold");
-    const lockKey = `${actor.userId}\ntest\n${newKey()}`;
+    const keyName = newKey();
+    const lockKey = `${actor.userId}\ntest\n${keyName}`;
+    const key = { lockKey, keyOwner: actor.userId, keyScope: "test", keyName };
     let release!: () => void;
     const held = new Promise<void>((resolve) => (release = resolve));
     let holding!: () => void;
@@ -78,18 +94,33 @@ describe("transactions in few trips", () => {
     // The first request: holds the key's lock and the athlete's position until released.
     const first = db.transaction(async (tx) => {
       await tx.execute(sql`select pg_advisory_xact_lock(hashtextextended(${lockKey}, 0))`);
-      expect((await lockPlacedRungs(tx, teamId, actor.athleteId!, [rung.rungId], lockKey)).size).toBe(1);
+      expect((await lockPlacedRungs(tx, teamId, actor.athleteId!, [rung.rungId], key)).size).toBe(1);
       holding();
       await held;
     });
     await isHolding;
     // The second: returns nothing instead of waiting for the first one's row lock (this would hang).
-    const second = await db.transaction((tx) => lockPlacedRungs(tx, teamId, actor.athleteId!, [rung.rungId], lockKey));
+    const second = await db.transaction((tx) => lockPlacedRungs(tx, teamId, actor.athleteId!, [rung.rungId], key));
     expect(second.size).toBe(0);
     release();
     await first;
     // Without a key, the same read finds and locks the rung's position.
     const plain = await db.transaction((tx) => lockPlacedRungs(tx, teamId, actor.athleteId!, [rung.rungId]));
     expect(plain.get(rung.rungId)?.isCurrent).toBe(true);
+  });
+
+  it("locks nothing for a replay: a key with its answer stored", async () => {
+    const { teamId } = await createTeam();
+    const { actor } = await createMember(teamId, "athlete", "Replay Athlete");
+    const rung = await placeOn(teamId, actor.athleteId!, "freestanding-handstand", "chest-to-wall-hold");
+    const keyName = newKey();
+    const key = { lockKey: `${actor.userId}\ntest\n${keyName}`, keyOwner: actor.userId, keyScope: "test", keyName };
+    const read = () => db.transaction((tx) => lockPlacedRungs(tx, teamId, actor.athleteId!, [rung.rungId], key));
+    // Claimed but not answered (the request's own claim, sent just before its read): locked and read.
+    const [row] = await db.insert(idempotencyKeys).values({ ownerId: actor.userId, scope: "test", key: keyName, requestHash: "h" }).returning();
+    expect((await read()).size).toBe(1);
+    // Answered: a replay reads the stored answer and takes no lock on the athlete's positions.
+    await db.update(idempotencyKeys).set({ state: "done", responseStatus: 201 }).where(eq(idempotencyKeys.id, row!.id));
+    expect((await read()).size).toBe(0);
   });
 });

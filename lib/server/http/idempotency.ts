@@ -64,11 +64,11 @@ function sweepNowAndThen(): void {
 export interface IdempotentWrite<R> {
   /**
    * Reads (and row locks) sent together with the claim. They must submit synchronously and write
-   * nothing. A read that locks rows adds `keyLock` (with this `lockKey`) to its conditions, so it
-   * skips them at once when another request still holds the key (this one answers 409 then, without
-   * queueing behind the first one's locks).
+   * nothing. A read that locks rows adds `keyOpen` (with these placeholders) to its conditions, so
+   * it locks nothing when another request still holds the key (this one answers 409 then, without
+   * queueing behind the first one's locks) or when the key already has its answer (a replay).
    */
-  read: (tx: Tx, lockKey: string) => Promise<R>;
+  read: (tx: Tx, key: KeyPlaceholders) => Promise<R>;
   /**
    * The write, run only once the key is claimed. Returns the answer, and the statements it still
    * has to send (sent in one trip with the stored answer).
@@ -89,11 +89,16 @@ export interface IdempotentWrite<R> {
 export async function withIdempotency<R>(request: IdempotentRequest, operation: IdempotentWrite<R>): Promise<Response> {
   sweepNowAndThen();
   const hash = requestHash(request.body);
-  const lockKey = `${request.ownerId}\n${request.scope}\n${request.key}`;
+  const key: KeyPlaceholders = {
+    lockKey: `${request.ownerId}\n${request.scope}\n${request.key}`,
+    keyOwner: request.ownerId,
+    keyScope: request.scope,
+    keyName: request.key,
+  };
   type Outcome = { replay: { status: number; body: unknown } } | { replay: null; value: unknown };
   const outcome = await transactionInTrips(async (tx): Promise<TripsResult<Outcome>> => {
     // BEGIN, the claim and the operation's reads go out together.
-    const [claimId, read] = await oneTrip(tx, () => [claim(tx, request, hash, lockKey), operation.read(tx, lockKey)] as const);
+    const [claimId, read] = await oneTrip(tx, () => [claim(tx, request, hash, key.lockKey), operation.read(tx, key)] as const);
     if (!claimId) return { value: { replay: await storedAnswer(tx, request, hash) } };
     const { value, last } = await operation.write(tx, read);
     // The operation's last statements, the stored answer and COMMIT go out together.
@@ -110,7 +115,24 @@ export async function withIdempotency<R>(request: IdempotentRequest, operation: 
 }
 
 /** Taken while a request holds the key: try-lock, so a second request never waits for the first. */
-export const keyLock = sql`pg_try_advisory_xact_lock(hashtextextended(${sql.placeholder("lockKey")}, 0))`;
+const keyLock = sql`pg_try_advisory_xact_lock(hashtextextended(${sql.placeholder("lockKey")}, 0))`;
+
+/** The placeholders `keyOpen` reads: the key's lock name and the key itself. */
+export interface KeyPlaceholders {
+  lockKey: string;
+  keyOwner: string;
+  keyScope: string;
+  keyName: string;
+}
+
+/**
+ * True for the request that may write under its key: it holds the key's lock (no other request
+ * does) and no answer is stored for the key yet. Its own claim, sent just before, is not done.
+ */
+export const keyOpen = sql`(${keyLock} and not exists (
+  select 1 from ${idempotencyKeys} k
+  where k.owner_id = ${sql.placeholder("keyOwner")}::uuid and k.scope = ${sql.placeholder("keyScope")}
+    and k.key = ${sql.placeholder("keyName")} and k.state = 'done'))`;
 
 const claimKey = preparedSql<{ id: string }>(
   "idempotency_claim",

@@ -2,7 +2,7 @@ import "server-only";
 import { and, asc, eq, sql } from "drizzle-orm";
 import type { Db, Queryable, Tx } from "@/db/client";
 import { preparedVariants } from "@/db/prepared";
-import { keyLock } from "@/lib/server/http/idempotency";
+import { keyOpen, type KeyPlaceholders } from "@/lib/server/http/idempotency";
 import { athletePositions, athletes, rungs } from "@/db/schema";
 import type { Measure } from "@/lib/engine/types";
 import { NotFound, Unprocessable, type FieldIssue } from "@/lib/errors";
@@ -18,7 +18,7 @@ export interface LogRung {
 }
 
 /** Rungs of the team among `rungIds`, joined to the athlete's positions on their ladders, locked. */
-const placedRungs = preparedVariants((database: Db, variant: "always" | "while_key_held") =>
+const placedRungs = preparedVariants((database: Db, variant: "always" | "while_key_open") =>
   database
     .select({
       rungId: rungs.id,
@@ -40,7 +40,7 @@ const placedRungs = preparedVariants((database: Db, variant: "always" | "while_k
       and(
         sql`${rungs.id} = any(${sql.placeholder("rungIds")}::uuid[])`,
         eq(rungs.teamId, sql.placeholder("teamId")),
-        variant === "while_key_held" ? keyLock : undefined,
+        variant === "while_key_open" ? keyOpen : undefined,
       ),
     )
     .orderBy(asc(athletePositions.ladderId))
@@ -52,21 +52,21 @@ const placedRungs = preparedVariants((database: Db, variant: "always" | "while_k
  * Locks the athlete's positions on the ladders of these rungs (FOR UPDATE, in ladder-id order, the
  * order every writer uses, so two transactions can never deadlock) and returns the rungs found on
  * those ladders. Read under the lock, `isCurrent` already reflects any concurrent promotion. With
- * an Idempotency-Key's `lockKey`, nothing is locked (or returned) unless this transaction holds
- * that key (see withIdempotency). Submits synchronously, so it can travel in a oneTrip.
+ * an Idempotency-Key, nothing is locked (or returned) unless this request may write under that key
+ * (see keyOpen). Submits synchronously, so it can travel in a oneTrip.
  */
 export async function lockPlacedRungs(
   tx: Tx,
   teamId: string,
   athleteId: string,
   rungIds: readonly string[],
-  lockKey?: string,
+  key?: KeyPlaceholders,
 ): Promise<Map<string, LogRung>> {
-  const rows = await placedRungs(tx, lockKey === undefined ? "always" : "while_key_held").execute({
+  const rows = await placedRungs(tx, key === undefined ? "always" : "while_key_open").execute({
     teamId,
     athleteId,
     rungIds: [...new Set(rungIds)],
-    lockKey,
+    ...key,
   });
   return new Map(
     rows.map((r) => [r.rungId, { rungId: r.rungId, ladderId: r.ladderId, measure: r.measure, positionId: r.positionId, isCurrent: r.currentRungId === r.rungId }]),
