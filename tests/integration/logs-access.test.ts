@@ -149,6 +149,39 @@ describe("who may log for whom", () => {
     expect((ranged.data as unknown as { items: unknown[] }).items).toHaveLength(2);
   });
 
+  it("lists logs of one date newest posted first, each exactly once across pages", async () => {
+    const { teamId } = await createTeam({ timeZone: ZONE });
+    const me = await createMember(teamId, "athlete", "Same Day");
+    const token = await bearerFor(me.actor);
+    const rung = await placeOn(teamId, me.actor.athleteId!, "freestanding-handstand", "chest-to-wall-hold");
+    // Five set-by-set posts on one date: ids are random, so only the time posted orders them.
+    const posted: string[] = [];
+    for (let i = 0; i < 5; i += 1) {
+      const res = await postLogAs(token, { performedOn: today(), entries: [{ rungId: rung.rungId, sets: [{ value: 20 + i }], pain: false }] });
+      posted.push((res.data as unknown as { id: string }).id);
+    }
+    const id = me.actor.athleteId!;
+    const seen: string[] = [];
+    let cursor: string | null = null;
+    do {
+      const path: string = `/api/v1/athletes/${id}/logs?limit=2${cursor ? `&cursor=${cursor}` : ""}`;
+      const page = (await call(athleteLogs, { token, params: { id }, path })).data as unknown as { items: { id: string }[]; nextCursor: string | null };
+      seen.push(...page.items.map((l) => l.id));
+      cursor = page.nextCursor;
+    } while (cursor);
+    expect(seen).toEqual([...posted].reverse());
+  });
+
+  it("answers a cursor it did not make with 422, not a database error", async () => {
+    const { teamId } = await createTeam({ timeZone: ZONE });
+    const me = await createMember(teamId, "athlete", "Bad Cursor");
+    const token = await bearerFor(me.actor);
+    const id = me.actor.athleteId!;
+    const forged = Buffer.from(JSON.stringify({ d: "2026-01-01", at: "yesterday", id: "x" })).toString("base64url");
+    const res = await call(athleteLogs, { token, params: { id }, path: `/api/v1/athletes/${id}/logs?cursor=${forged}` });
+    expect(res.status).toBe(422);
+  });
+
   it("keeps a log's entries in the order they were posted", async () => {
     const { teamId } = await createTeam({ timeZone: ZONE });
     const me = await createMember(teamId, "athlete", "In Order");

@@ -1,5 +1,5 @@
 import "server-only";
-import { and, desc, eq, gte, isNull, lt, lte, or } from "drizzle-orm";
+import { and, desc, eq, gte, isNull, lte, sql } from "drizzle-orm";
 import { z } from "zod";
 import type { z as Z } from "zod";
 import { db } from "@/db/client";
@@ -10,9 +10,17 @@ import { decodeCursor, pageOf } from "@/lib/server/http/cursor";
 import type { LogDto, ZLogsQuery } from "@/lib/validation/logs";
 import { entriesOf, toLogDto } from "./log-dto";
 
-const zLogCursor = z.object({ d: z.string(), id: z.string() });
+/**
+ * The last row's sort key. `at` is its created_at as PostgreSQL prints it (microseconds kept: a
+ * JavaScript Date would drop them and skip or repeat logs posted within one millisecond).
+ */
+const zLogCursor = z.object({
+  d: z.iso.date(),
+  at: z.string().regex(/^\d{4}-\d{2}-\d{2} \d{2}:\d{2}:\d{2}(\.\d{1,6})?[+-]\d{2}(:\d{2}){0,2}$/),
+  id: z.uuid(),
+});
 
-/** GET /api/v1/athletes/{id}/logs: newest first, with entries, a page at a time. */
+/** GET /api/v1/athletes/{id}/logs: newest first (by date, then by when posted), with entries, a page at a time. */
 export async function listAthleteLogs(actor: Actor, athleteId: string, query: Z.output<typeof ZLogsQuery>) {
   await getAthlete(actor, athleteId); // 404 for another team's or another athlete's record
   const after = decodeCursor(zLogCursor, query.cursor);
@@ -25,6 +33,7 @@ export async function listAthleteLogs(actor: Actor, athleteId: string, query: Z.
       sessionRpe: logs.sessionRpe,
       enteredById: logs.enteredById,
       createdAt: logs.createdAt,
+      cursorAt: sql<string>`${logs.createdAt}::text`,
     })
     .from(logs)
     .where(
@@ -34,12 +43,14 @@ export async function listAthleteLogs(actor: Actor, athleteId: string, query: Z.
         isNull(logs.deletedAt),
         query.from ? gte(logs.performedOn, query.from) : undefined,
         query.to ? lte(logs.performedOn, query.to) : undefined,
-        after ? or(lt(logs.performedOn, after.d), and(eq(logs.performedOn, after.d), lt(logs.id, after.id))) : undefined,
+        after
+          ? sql`(${logs.performedOn}, ${logs.createdAt}, ${logs.id}) < (${after.d}::date, ${after.at}::timestamptz, ${after.id}::uuid)`
+          : undefined,
       ),
     )
-    .orderBy(desc(logs.performedOn), desc(logs.id))
+    .orderBy(desc(logs.performedOn), desc(logs.createdAt), desc(logs.id))
     .limit(query.limit + 1);
-  const page = pageOf(rows, query.limit, (row) => ({ d: row.performedOn, id: row.id }));
+  const page = pageOf(rows, query.limit, (row) => ({ d: row.performedOn, at: row.cursorAt, id: row.id }));
   const entries = await entriesOf(db, page.items.map((l) => l.id));
   const items: LogDto[] = page.items.map((log) => toLogDto(log, entries.get(log.id) ?? []));
   return { items, nextCursor: page.nextCursor };
