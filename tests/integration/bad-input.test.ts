@@ -1,9 +1,14 @@
 import { describe, expect, it } from "vitest";
 import { GET as getAthlete, PATCH as patchAthlete } from "@/app/api/v1/athletes/[id]/route";
+import { GET as listAssignments } from "@/app/api/v1/athletes/[id]/assignments/route";
 import { GET as listAthletes, POST as createAthlete } from "@/app/api/v1/athletes/route";
+import { GET as listBlocks } from "@/app/api/v1/blocks/route";
+import { GET as listLadders } from "@/app/api/v1/ladders/route";
+import { GET as listPlans } from "@/app/api/v1/plans/route";
+import { GET as listSquads } from "@/app/api/v1/squads/route";
 import { POST as signup } from "@/app/api/v1/signup/route";
 import { POST as createToken } from "@/app/api/v1/tokens/route";
-import { bearerFor, createTeam } from "../support/factories";
+import { bearerFor, createAthleteRecord, createTeam } from "../support/factories";
 import { call } from "../support/http";
 
 describe("bad input never becomes a 500", () => {
@@ -45,6 +50,27 @@ describe("bad input never becomes a 500", () => {
     expect((await call(listAthletes, { token, path: "/api/v1/athletes?limit=0" })).status).toBe(422);
     expect((await call(listAthletes, { token, path: "/api/v1/athletes?limit=abc" })).status).toBe(422);
     expect((await call(listAthletes, { token, path: "/api/v1/athletes?unknown=1" })).status).toBe(422);
+  });
+
+  it("answers 422, not a database error, for a forged page cursor", async () => {
+    const { owner, teamId } = await createTeam();
+    const token = await bearerFor(owner);
+    const forged = (value: unknown) => Buffer.from(JSON.stringify(value)).toString("base64url");
+    const byName = forged({ name: "a", id: "not-a-uuid" });
+    for (const [list, path] of [
+      [listAthletes, "/api/v1/athletes"],
+      [listSquads, "/api/v1/squads"],
+      [listBlocks, "/api/v1/blocks"],
+      [listPlans, "/api/v1/plans"],
+      [listLadders, "/api/v1/ladders"],
+    ] as const) {
+      const res = await call(list, { token, path: `${path}?cursor=${byName}` });
+      expect(res.status, path).toBe(422);
+    }
+    const athleteId = await createAthleteRecord(teamId);
+    const byDate = forged({ startsOn: "soon", id: "x" });
+    const res = await call(listAssignments, { token, params: { id: athleteId }, path: `/api/v1/athletes/${athleteId}/assignments?cursor=${byDate}` });
+    expect(res.status).toBe(422);
   });
 
   it("refuses oversized bodies with 413", async () => {

@@ -10,7 +10,7 @@ import { decodeCursor, pageOf } from "@/lib/server/http/cursor";
 import type { ZAssignmentListQuery } from "@/lib/validation/plans";
 import { selectAssignments, toAssignmentDto } from "./assignment-dto";
 
-const zCursor = z.object({ startsOn: z.string(), id: z.string() });
+const zCursor = z.object({ startsOn: z.iso.date(), id: z.uuid() });
 
 /** An athlete's assignments, latest start first. Staff see any athlete of the team; an athlete only their own. */
 export async function listAssignments(actor: Actor, athleteId: string, query: z.output<typeof ZAssignmentListQuery>) {

@@ -4,14 +4,12 @@ import { z } from "zod";
 import { db } from "@/db/client";
 import { formChecks } from "@/db/schema";
 import type { Actor } from "@/lib/server/actor";
-import { decodeCursor, pageOf } from "@/lib/server/http/cursor";
+import { decodeCursor, pageOf, zPgTimestamp } from "@/lib/server/http/cursor";
 import type { ZFormCheckListQuery } from "@/lib/validation/form-checks";
 import { selectFormChecks, toFormCheckDto } from "./form-check-dto";
 import { visibleFormChecks } from "./form-check-scope";
 
-/** Postgres's own text form of a timestamptz, so a forged cursor cannot break the cast. */
-const PG_TIMESTAMP = /^\d{4}-\d{2}-\d{2} \d{2}:\d{2}:\d{2}(\.\d{1,6})?[+-]\d{2}(:\d{2})?$/;
-const zCursor = z.object({ at: z.string().regex(PG_TIMESTAMP), id: z.uuid() });
+const zCursor = z.object({ at: zPgTimestamp, id: z.uuid() });
 
 /** Newest first: the team's form checks for staff (optionally one athlete's), an athlete's own otherwise. */
 export async function listFormChecks(actor: Actor, query: z.output<typeof ZFormCheckListQuery>) {

@@ -28,4 +28,11 @@ export function pageOf<T, K>(rows: T[], limit: number, keyOf: (row: T) => K) {
   };
 }
 
-export const zNameIdCursor = z.object({ name: z.string(), id: z.string() });
+/**
+ * A timestamptz as PostgreSQL prints it ("2026-12-02 11:57:51.123456+00"): cursors carry it as
+ * text, microseconds kept (a JavaScript Date would drop them), and a forged one cannot break the cast.
+ */
+export const zPgTimestamp = z.string().regex(/^\d{4}-\d{2}-\d{2} \d{2}:\d{2}:\d{2}(\.\d{1,6})?[+-]\d{2}(:\d{2})?$/);
+
+/** Name-ordered lists; the id is checked so a forged cursor is a 422, never a failed uuid cast. */
+export const zNameIdCursor = z.object({ name: z.string(), id: z.uuid() });

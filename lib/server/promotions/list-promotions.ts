@@ -4,16 +4,12 @@ import { z } from "zod";
 import { db } from "@/db/client";
 import { promotions } from "@/db/schema";
 import type { Actor } from "@/lib/server/actor";
-import { decodeCursor, pageOf } from "@/lib/server/http/cursor";
+import { decodeCursor, pageOf, zPgTimestamp } from "@/lib/server/http/cursor";
 import type { PromotionListQuery } from "@/lib/validation/promotions";
 import { selectPromotions, toPromotionDto } from "./promotion-dto";
 import { visiblePromotions } from "./promotion-scope";
 
-// PostgreSQL's text form of a timestamptz, e.g. "2026-12-02 11:57:51.123456+00".
-const zCursor = z.object({
-  createdAt: z.string().regex(/^\d{4}-\d{2}-\d{2} \d{2}:\d{2}:\d{2}(\.\d{1,6})?[+-]\d{2}(:\d{2})?$/),
-  id: z.uuid(),
-});
+const zCursor = z.object({ createdAt: zPgTimestamp, id: z.uuid() });
 
 /** Promotions the actor may see, newest first, filtered by status, athlete and ladder. */
 export async function listPromotions(actor: Actor, query: PromotionListQuery) {
