@@ -155,6 +155,17 @@ describe("GET /api/v1/readiness", () => {
     expect(names((await table(`limit=3&cursor=${byName.nextCursor}`)).items)).toEqual([QUINN]);
     const mixed = await call(readinessRoute, { token, path: `/api/v1/readiness?sort=name&cursor=${first.nextCursor}` });
     expect(mixed.status).toBe(422);
+    const byLastSession = await table("sort=lastSession&limit=2");
+    expect((await table(`sort=lastSession&limit=2&cursor=${byLastSession.nextCursor}`)).items).toHaveLength(2);
+  });
+
+  it("answers 422, not a database error, for a forged cursor whose key does not fit its sort", async () => {
+    const id = "00000000-0000-4000-8000-000000000000";
+    for (const [sort, k] of [["readiness", "abc"], ["-lastSession", "someday"], ["lastSession", 7]] as const) {
+      const cursor = Buffer.from(JSON.stringify({ s: sort, k, n: "x", id })).toString("base64url");
+      const res = await call(readinessRoute, { token, path: `/api/v1/readiness?sort=${sort}&cursor=${cursor}` });
+      expect(res.status, `${sort} ${k}`).toBe(422);
+    }
   });
 
   it("answers 422 for a week ISO 8601 does not have and accepts a real week 53 (cross-checked with date-fns)", async () => {

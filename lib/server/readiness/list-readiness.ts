@@ -4,11 +4,16 @@ import { db } from "@/db/client";
 import type { Actor } from "@/lib/server/actor";
 import { decodeCursor, encodeCursor } from "@/lib/server/http/cursor";
 import { invalidField } from "@/lib/errors";
-import { READINESS_SORTS, type ReadinessCell, type ReadinessPage, type ReadinessQuery, type ReadinessRow } from "@/lib/validation/readiness";
+import { type ReadinessCell, type ReadinessPage, type ReadinessQuery, type ReadinessRow } from "@/lib/validation/readiness";
 import { readinessStatement, type ReadinessCursor } from "./readiness-sql";
 import { reviewWeek, type ReviewWeek } from "./readiness-week";
 
-const zCursor = z.object({ s: z.enum(READINESS_SORTS), k: z.union([z.string(), z.number()]), n: z.string(), id: z.uuid() });
+/** The sort key's type follows the sort, so a forged cursor is a 422 rather than a failed cast. */
+const zCursor = z.union([
+  z.object({ s: z.enum(["name", "-name"]), k: z.string() }),
+  z.object({ s: z.enum(["readiness", "-readiness"]), k: z.number().int() }),
+  z.object({ s: z.enum(["lastSession", "-lastSession"]), k: z.iso.date() }),
+]).and(z.object({ n: z.string(), id: z.uuid() })) satisfies z.ZodType<ReadinessCursor>;
 
 interface RawRow extends Record<string, unknown> {
   id: string;
