@@ -97,6 +97,25 @@ function hammer(baseUrl, world, options, sample) {
   });
 }
 
+/**
+ * Reference, not a goal: GET /api/v1/me saturated the same way (token auth, one read, no
+ * transaction). It is about the most a Next.js route with a bearer token does on this machine,
+ * and puts the logging endpoint's numbers in proportion.
+ */
+function framework(baseUrl, world, seconds) {
+  return new Promise((resolve, reject) => {
+    const latencies = [];
+    const instance = autocannon(
+      { url: `${baseUrl}/api/v1/me`, headers: { authorization: `Bearer ${world.token}` }, duration: seconds, connections: 50 },
+      (error, result) => {
+        if (error) return reject(error);
+        resolve({ requests: latencies.length, rps: latencies.length / seconds, ...percentiles(latencies), errors: result.errors + result.timeouts + (result.non2xx ?? 0) });
+      },
+    );
+    instance.on("response", (_client, _status, _bytes, responseTime) => latencies.push(responseTime));
+  });
+}
+
 /** Replays sampled keys three times each, concurrently: every answer must be the first log, no new rows. */
 async function replays(baseUrl, dbUrl, world, candidates) {
   // Only keys whose first request completed (a run's last requests are cut off when it ends).
@@ -203,6 +222,7 @@ export async function logBench({ baseUrl, dbUrl, seconds }) {
   await settle(dbUrl);
   const fixed = await hammer(baseUrl, world, { seconds, connections: 10, rate: 200, date }, sample);
   const replay = await replays(baseUrl, dbUrl, world, sample);
+  const reference = await framework(baseUrl, world, seconds);
   const ratio = saturated.rps / floorResult.rps;
   const goals = {
     fixedRateP95Under25ms: fixed.p95 !== null && fixed.p95 < 25 && fixed.errors === 0,
@@ -212,8 +232,8 @@ export async function logBench({ baseUrl, dbUrl, seconds }) {
   const row = (name, r) => ({ bench: name, requests: r.requests, "req/s": round(r.rps, 1), "p50 ms": round(r.p50), "p95 ms": round(r.p95), "p99 ms": round(r.p99), errors: r.errors });
   return {
     name: "log",
-    table: [row("(1) raw INSERT floor, 50 pg clients", floorResult), row("(2) POST /api/v1/logs, 50 conns", saturated), row("(3) POST /api/v1/logs, 200 req/s, 10 conns", fixed)],
-    summary: { ratio: round(ratio, 4), sequential: { p50: round(single.p50), p95: round(single.p95) }, replay, goals },
-    raw: { floor: floorResult, saturated, fixed },
+    table: [row("(1) raw INSERT floor, 50 pg clients", floorResult), row("(2) POST /api/v1/logs, 50 conns", saturated), row("(3) POST /api/v1/logs, 200 req/s, 10 conns", fixed), row("(ref) GET /api/v1/me, 50 conns", reference)],
+    summary: { ratio: round(ratio, 4), referenceRatio: round(reference.rps / floorResult.rps, 4), sequential: { p50: round(single.p50), p95: round(single.p95) }, replay, goals },
+    raw: { floor: floorResult, saturated, fixed, reference },
   };
 }
