@@ -66,5 +66,7 @@ export const logEntries = pgTable(
     index("log_entries_log_idx").on(t.logId),
     // The weekly readiness table's per-position figures (sessions and pain in a week).
     index("log_entries_athlete_ladder_date_idx").on(t.athleteId, t.ladderId, t.performedOn),
+    // The last pain on a rung, however long ago, without reading the rung's whole history.
+    index("log_entries_pain_idx").on(t.athleteId, t.rungId, t.performedOn).where(sql`${t.pain} and ${t.deletedAt} is null`),
   ],
 );

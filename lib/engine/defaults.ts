@@ -5,6 +5,13 @@
  */
 import type { Measure, Standard, StepDownRule } from "./types";
 
+/**
+ * The most recent sessions any clause of a standard looks back over: the sessions window, the pain
+ * window and the run of drops are each at most this many (the standard's limits). Readers that feed
+ * the engine may stop there.
+ */
+export const MAX_LOOKBACK_SESSIONS = 20;
+
 // common practice, no source
 export const DEFAULT_STEP_DOWN: StepDownRule = {
   painSessions: 2,

@@ -2,7 +2,7 @@
 export * from "./types";
 export * from "./tags";
 export { rpeFromRir, rirFromRpe, setRpe, effortOk } from "./effort";
-export { DEFAULT_STEP_DOWN, defaultStandard } from "./defaults";
+export { DEFAULT_STEP_DOWN, MAX_LOOKBACK_SESSIONS, defaultStandard } from "./defaults";
 export { evaluate } from "./evaluate";
 export { READINESS_WEIGHTS, readinessScore, type ReadinessInput } from "./readiness";
 export { mergeSessions, sessionsInRange } from "./merge-sessions";

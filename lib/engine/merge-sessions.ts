@@ -36,14 +36,18 @@ function mergeSortedDescending(sorted: Session[]): Session[] {
     }
   }
   if (!hasDuplicate) return sorted;
+  // One new sets array per merged date, filled in place: a date logged set by set can hold many
+  // entries, and copying the sets gathered so far for each of them would grow with their square.
   const merged: Session[] = [];
+  let open: Session | null = null;
   for (const session of sorted) {
-    const last = merged[merged.length - 1];
-    if (last && last.date === session.date) {
-      merged[merged.length - 1] = { date: last.date, sets: [...last.sets, ...session.sets], pain: last.pain || session.pain };
-    } else {
-      merged.push(session);
+    if (open && open.date === session.date) {
+      open.sets.push(...session.sets);
+      open.pain ||= session.pain;
+      continue;
     }
+    open = { date: session.date, sets: [...session.sets], pain: session.pain };
+    merged.push(open);
   }
   return merged;
 }

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { MEASURES, PROMOTION_MODES, RUNG_TAGS, type Measure } from "@/lib/engine";
+import { MAX_LOOKBACK_SESSIONS, MEASURES, PROMOTION_MODES, RUNG_TAGS, type Measure } from "@/lib/engine";
 import { zDate, zId, zName, zPageQuery } from "./common";
 
 /** Input schemas for ladders, rungs, standards and placements (shared by forms and handlers). */
@@ -40,7 +40,7 @@ const int = (label: string, min: number, max: number) =>
 export const ZStepDown = z
   .strictObject({
     painSessions: int("Pain sessions", 1, 10),
-    painWindow: int("Pain window", 1, 20),
+    painWindow: int("Pain window", 1, MAX_LOOKBACK_SESSIONS),
     dropBelowPct: int("Drop threshold", 1, 99),
     dropSessions: int("Drop sessions", 1, 10),
   })
@@ -60,7 +60,7 @@ export const ZStandardInput = z
     maxRpe: z.number({ error: "RPE must be a number." }).min(1, "RPE runs 1–10.").max(10, "RPE runs 1–10.").nullable().optional(),
     minRir: int("Reps in reserve", 0, 10).nullable().optional(),
     sessionsRequired: int("Sessions required", 1, 20),
-    sessionsWindow: int("Sessions window", 1, 20),
+    sessionsWindow: int("Sessions window", 1, MAX_LOOKBACK_SESSIONS),
     minDaysOnRung: int("Days on rung", 0, 365),
     painFree: z.boolean({ error: "Say whether sessions must be pain-free." }),
     stepDown: ZStepDown.nullable().optional(),

@@ -44,10 +44,21 @@ async function floor(dbUrl, world, seconds) {
   return { requests: latencies.length, rps: latencies.length / seconds, ...percentiles(latencies), errors };
 }
 
-function logBody(world, i, date) {
+/**
+ * The days posts fall on: the past year, newest first. Post i goes to athlete i mod 50 and day
+ * i mod 365, so each athlete builds up a history of training days with a post or two each, as a
+ * year of logging would (one date for every post would make a single session of hundreds of
+ * sets, which nobody logs).
+ */
+function pastYear() {
+  const yesterday = Date.now() - 86_400_000;
+  return Array.from({ length: 365 }, (_, i) => new Date(yesterday - i * 86_400_000).toISOString().slice(0, 10));
+}
+
+function logBody(world, i, days) {
   return JSON.stringify({
     athleteId: world.athleteIds[i % world.athleteIds.length],
-    performedOn: date,
+    performedOn: days[i % days.length],
     entries: [{ rungId: world.rungId, sets: [{ value: 20 + (i % 15), rpe: 7 }, { value: 18 + (i % 10), rpe: 7.5 }], pain: false }],
   });
 }
@@ -71,7 +82,7 @@ function hammer(baseUrl, world, options, sample) {
             setupRequest: (request) => {
               n += 1;
               const key = `bench-${crypto.randomUUID()}`;
-              const body = logBody(world, n, options.date);
+              const body = logBody(world, n, options.days);
               if (sample.length < 2000 && n % 3 === 0) sample.push({ key, body });
               return { ...request, body, headers: { ...request.headers, "idempotency-key": key } };
             },
@@ -185,14 +196,14 @@ async function settle(dbUrl) {
 }
 
 /** One request at a time: the latency of the request path itself, without queueing. */
-async function sequential(baseUrl, world, date, count = 30) {
+async function sequential(baseUrl, world, days, count = 30) {
   const latencies = [];
   for (let i = 0; i < count; i += 1) {
     const t = performance.now();
     const res = await fetch(`${baseUrl}/api/v1/logs`, {
       method: "POST",
       headers: { "content-type": "application/json", authorization: `Bearer ${world.token}`, "idempotency-key": `seq-${crypto.randomUUID()}` },
-      body: logBody(world, i, date),
+      body: logBody(world, i, days),
     });
     await res.text();
     latencies.push(performance.now() - t);
@@ -202,8 +213,8 @@ async function sequential(baseUrl, world, date, count = 30) {
 
 export async function logBench({ baseUrl, dbUrl, seconds }) {
   const world = await seed(baseUrl, dbUrl);
-  const date = new Date(Date.now() - 86_400_000).toISOString().slice(0, 10);
-  const single = await sequential(baseUrl, world, date);
+  const days = pastYear();
+  const single = await sequential(baseUrl, world, days);
   const health = [];
   for (let i = 0; i < 20; i += 1) {
     const t = performance.now();
@@ -214,13 +225,13 @@ export async function logBench({ baseUrl, dbUrl, seconds }) {
   console.log(`[bench] one request at a time: p50 ${round(single.p50)} ms, p95 ${round(single.p95)} ms`);
   const sample = [];
   // Warm the route (first compile of lazy chunks, pools) so it does not count against the runs.
-  await hammer(baseUrl, world, { seconds: 3, connections: 10, date }, []);
+  await hammer(baseUrl, world, { seconds: 3, connections: 10, days }, []);
   await settle(dbUrl);
   const floorResult = await floor(dbUrl, world, seconds);
   await settle(dbUrl);
-  const saturated = await hammer(baseUrl, world, { seconds, connections: 50, date }, sample);
+  const saturated = await hammer(baseUrl, world, { seconds, connections: 50, days }, sample);
   await settle(dbUrl);
-  const fixed = await hammer(baseUrl, world, { seconds, connections: 10, rate: 200, date }, sample);
+  const fixed = await hammer(baseUrl, world, { seconds, connections: 10, rate: 200, days }, sample);
   const replay = await replays(baseUrl, dbUrl, world, sample);
   const reference = await framework(baseUrl, world, seconds);
   const ratio = saturated.rps / floorResult.rps;

@@ -7,11 +7,14 @@ import { describe, expect, it } from "vitest";
 import { db } from "@/db/client";
 import { athletePositions, positionMoves, promotions } from "@/db/schema";
 import { evaluatePosition } from "@/lib/server/promotions/evaluate-position";
+import { forecastPosition } from "@/lib/server/promotions/forecast-position";
 import { createAthleteRecord, createTeam } from "../support/factories";
 import {
   addPrerequisite,
   createTestLadder,
   daysAgo,
+  GOOD_SETS,
+  insertSession,
   logAndEvaluate,
   placeAthlete,
   WEAK_SETS,
@@ -49,6 +52,54 @@ describe("position figures", () => {
     const second = await positionRow(positionId);
     expect(second.lastSessionOn).toBe(daysAgo(2));
     expect(second.updatedAt.getTime()).toBeGreaterThan(first.getTime());
+  });
+});
+
+describe("a long history on one rung", () => {
+  // A verdict reads only the latest session dates a standard can look at (its windows are at most
+  // 20 sessions), so a log costs the same after years on a rung; these pin what must not change.
+  it("still judges a 20-session window in full, with a session logged for tomorrow", async () => {
+    const { teamId, owner } = await createTeam();
+    const athleteId = await createAthleteRecord(teamId, "Hal");
+    const standard = { sessionsWindow: 20, sessionsRequired: 20, minDaysOnRung: 0, stepDown: null };
+    const ladder = await createTestLadder(teamId, { mode: "approve", standard });
+    const positionId = await placeAthlete(teamId, athleteId, ladder, ladder.rungIds[0]!, daysAgo(60));
+    const session = { teamId, athleteId, ladderId: ladder.ladderId, rungId: ladder.rungIds[0]! };
+    for (let n = 59; n >= 50; n -= 1) await insertSession(db, { ...session, date: daysAgo(n), sets: WEAK_SETS });
+    for (let n = 19; n >= 1; n -= 1) await insertSession(db, { ...session, date: daysAgo(n), sets: GOOD_SETS });
+    // Tomorrow counts toward nothing today, and must not push a session out of the window.
+    await insertSession(db, { ...session, date: daysAgo(-1), sets: GOOD_SETS });
+
+    const [verdict] = await logAndEvaluate(owner, { ...session, date: daysAgo(0), sets: GOOD_SETS });
+    expect(verdict).toMatchObject({ status: "met" });
+    expect(await positionRow(positionId)).toMatchObject({ sessionsMet: 20, lastSessionOn: daysAgo(0), status: "pending_approval" });
+  });
+
+  it("keeps the last pain however many sessions ago it was", async () => {
+    const { teamId, owner } = await createTeam();
+    const athleteId = await createAthleteRecord(teamId, "Ines");
+    const ladder = await createTestLadder(teamId, { mode: "auto", standard: { minDaysOnRung: 365 } });
+    const positionId = await placeAthlete(teamId, athleteId, ladder, ladder.rungIds[0]!, daysAgo(60));
+    const session = { teamId, athleteId, ladderId: ladder.ladderId, rungId: ladder.rungIds[0]!, sets: GOOD_SETS };
+    await insertSession(db, { ...session, date: daysAgo(45), pain: true });
+    await insertSession(db, { ...session, date: daysAgo(40), pain: true });
+    for (let n = 30; n >= 1; n -= 1) await insertSession(db, { ...session, date: daysAgo(n) });
+
+    await logAndEvaluate(owner, { ...session, date: daysAgo(0) });
+    expect(await positionRow(positionId)).toMatchObject({ lastPainOn: daysAgo(40), status: "not_yet" });
+  });
+
+  it("forecasts from every session on the rung, not only the recent ones", async () => {
+    const { teamId, owner } = await createTeam();
+    const athleteId = await createAthleteRecord(teamId, "Jon");
+    const ladder = await createTestLadder(teamId, { mode: "auto" });
+    await placeAthlete(teamId, athleteId, ladder, ladder.rungIds[0]!, daysAgo(40));
+    const session = { teamId, athleteId, ladderId: ladder.ladderId, rungId: ladder.rungIds[0]! };
+    for (let n = 30; n >= 1; n -= 1) await insertSession(db, { ...session, date: daysAgo(n), sets: [{ value: 5 + (30 - n) * 0.25, rpe: 8 }] });
+
+    const result = await forecastPosition(owner, athleteId, ladder.ladderId);
+    expect(result.points).toHaveLength(30);
+    expect(result.points[0]).toEqual({ date: daysAgo(30), best: 5 });
   });
 });
 

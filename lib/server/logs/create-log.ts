@@ -108,6 +108,7 @@ async function writeLog(
 
   // The id is made here so the entries can go out in the same trip as their log.
   const logId = randomUUID();
+  const asOf = new Date();
   const [[log], entries, ...contexts] = await oneTrip(tx, () => [
     insertLog(tx).execute({
       id: logId,
@@ -127,8 +128,8 @@ async function writeLog(
         ...prepared.flatMap((e, i) => Object.entries(e).map(([field, value]) => [`${field}${i}`, value])),
       ]),
     ),
-    ...currentPositions(rungList).map((positionId) => loadPositionContext(tx, { positionId, teamId: actor.teamId })),
+    ...currentPositions(rungList).map((positionId) => loadPositionContext(tx, { positionId, teamId: actor.teamId, asOf })),
   ] as const);
-  const { verdicts, figures } = await evaluateLoaded(tx, actor, { contexts, logId });
+  const { verdicts, figures } = await evaluateLoaded(tx, actor, { contexts, logId }, asOf);
   return { value: { ...toLogDto(log!, entries), verdicts }, last: figures };
 }

@@ -23,7 +23,7 @@ export async function evaluateAfterLog(
   input: { positionIds: string[]; logId: string },
   asOf: Date = new Date(),
 ): Promise<VerdictDto[]> {
-  const contexts = await oneTrip(tx, () => input.positionIds.map((positionId) => loadPositionContext(tx, { positionId, teamId: actor.teamId })));
+  const contexts = await oneTrip(tx, () => input.positionIds.map((positionId) => loadPositionContext(tx, { positionId, teamId: actor.teamId, asOf })));
   const { verdicts, figures } = await evaluateLoaded(tx, actor, { contexts, logId: input.logId }, asOf);
   await oneTrip(tx, figures);
   return verdicts;
@@ -44,7 +44,7 @@ export async function evaluateLoaded(
   for (const loaded of input.contexts) {
     if (!loaded) throw new NotFound("position");
     // A move on one ladder can reach a prerequisite of another: read the rest afresh after one.
-    const ctx: PositionContext | null = moved ? await loadPositionContext(tx, { positionId: loaded.position.id, teamId: actor.teamId }) : loaded;
+    const ctx: PositionContext | null = moved ? await loadPositionContext(tx, { positionId: loaded.position.id, teamId: actor.teamId, asOf }) : loaded;
     if (!ctx) throw new NotFound("position");
     const evaluation = await evaluateContext(tx, ctx, { asOf, actor, logId: input.logId, locked: true });
     if (evaluation.verdict.promotedTo !== null || (evaluation.verdict.achieved === true && ctx.position.achievedAt === null)) moved = true;

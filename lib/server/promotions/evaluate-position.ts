@@ -55,7 +55,7 @@ type Outcome = {
  */
 export async function evaluatePosition(tx: Tx, input: EvaluatePositionInput): Promise<VerdictDto> {
   const teamId = input.actor === "system" ? undefined : input.actor.teamId;
-  const ctx = await loadPositionContext(tx, { positionId: input.positionId, teamId, lock: !input.locked });
+  const ctx = await loadPositionContext(tx, { positionId: input.positionId, teamId, lock: !input.locked, asOf: input.asOf });
   if (!ctx) throw new NotFound("position");
   const { verdict, figures } = await evaluateContext(tx, ctx, input);
   await figures();
@@ -79,7 +79,7 @@ export async function evaluateContext(tx: Tx, ctx: PositionContext, input: Omit<
   if (!outcome.promotedTo) return { verdict, figures: () => writeFigures(tx, ctx, judged, outcome) };
 
   // The athlete is on a new rung: its figures start from the evidence there (usually none yet).
-  const moved = await loadPositionContext(tx, { positionId: ctx.position.id });
+  const moved = await loadPositionContext(tx, { positionId: ctx.position.id, asOf: input.asOf });
   if (!moved) return { verdict, figures: () => Promise.resolve() };
   const fresh = judgePosition(moved, input.asOf);
   const movedOutcome = { ...outcome, pendingDirection: moved.pending?.direction ?? null, achieved: false };

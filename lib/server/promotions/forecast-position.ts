@@ -15,7 +15,7 @@ import { loadPositionContext } from "./load-position-context";
  */
 export async function forecastPosition(actor: Actor, athleteId: string, ladderId: string, asOf: Date = new Date()): Promise<ForecastDto> {
   const positionId = await findVisiblePosition(db, actor, athleteId, ladderId);
-  const ctx = await loadPositionContext(db, { positionId, teamId: actor.teamId });
+  const ctx = await loadPositionContext(db, { positionId, teamId: actor.teamId, asOf, history: "all" });
   if (!ctx) throw new NotFound("position");
   const { sessions, today } = judgePosition(ctx, asOf);
   const points: ForecastDto["points"] = [];

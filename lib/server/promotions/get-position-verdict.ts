@@ -20,7 +20,7 @@ export async function getPositionVerdict(
   asOf: Date = new Date(),
 ): Promise<PositionVerdictDto> {
   const positionId = await findVisiblePosition(db, actor, where.athleteId, where.ladderId);
-  const ctx = await loadPositionContext(db, { positionId, teamId: actor.teamId });
+  const ctx = await loadPositionContext(db, { positionId, teamId: actor.teamId, asOf });
   if (!ctx) throw new NotFound("position");
   const judged = judgePosition(ctx, asOf);
   const pending = ctx.pending;

@@ -7,8 +7,9 @@ export interface Judgement {
   explanation: string;
   /** The team-local date of `asOf`. */
   today: string;
-  /** Sessions on the rung since the athlete reached it, newest first. */
+  /** Sessions on the rung read with the context (see loadPositionContext), newest first. */
   sessions: Session[];
+  /** The last date with pain on the rung up to today, however long ago. */
   lastPainOn: string | null;
 }
 
@@ -34,6 +35,6 @@ export function judgePosition(ctx: PositionContext, asOf: Date): Judgement {
     explanation: explainVerdict(verdict),
     today,
     sessions,
-    lastPainOn: sessions.find((s) => s.pain)?.date ?? null,
+    lastPainOn: ctx.painDates.find((date) => date <= today) ?? null,
   };
 }

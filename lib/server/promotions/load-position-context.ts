@@ -3,7 +3,7 @@ import { and, eq, sql } from "drizzle-orm";
 import type { Db, Queryable } from "@/db/client";
 import { preparedVariants } from "@/db/prepared";
 import { athletePositions, athletes, ladders, rungs, standards, teams } from "@/db/schema";
-import type { Measure, PrerequisiteState, PromotionMode, Session, Standard } from "@/lib/engine";
+import { addDays, MAX_LOOKBACK_SESSIONS, type Measure, type PrerequisiteState, type PromotionMode, type Session, type Standard } from "@/lib/engine";
 import { standardOf } from "./standard-of";
 import { standardColumns } from "@/lib/server/ladders/standard-columns";
 
@@ -39,11 +39,23 @@ export interface PositionContext {
   /** The proposal waiting for a coach on this position, if any (at most one). */
   pending: { id: string; direction: "up" | "down" } | null;
   /**
-   * Every live entry on the current rung since the athlete reached it, oldest first and not yet
-   * merged into sessions (judgePosition merges them and drops dates after its "today").
+   * The live entries on the current rung since the athlete reached it, oldest first and not yet
+   * merged into sessions (judgePosition merges them and drops dates after its "today"): those of
+   * the most recent dates the engine can look at, or every one with `history: "all"`.
    */
   entries: Session[];
+  /** The latest dates with pain on the rung (a few, newest first), however old: see judgePosition. */
+  painDates: string[];
 }
+
+/**
+ * How many dates can lie after a team's today yet not after the horizon (the UTC date of the
+ * instant plus one): local dates run from the UTC date minus one to plus one, so at most two.
+ */
+const PAST_TODAY = 2;
+
+/** The dates read for a verdict: every window of the standard, plus the dates past today. */
+const RECENT_DATES = MAX_LOOKBACK_SESSIONS + PAST_TODAY;
 
 /** The nearest live rung above the position's rung (archived rungs sit at ≤ 0). */
 const nextRung = sql<RungRef | null>`(
@@ -76,13 +88,41 @@ const prerequisites = sql<PrerequisiteState[]>`(
     where r.ladder_id = ${athletePositions.ladderId} and r.archived_at is null and r.position > ${rungs.position}
     order by r.position limit 1))`;
 
-/** The entries on the current rung since the position's date, as the engine reads them. */
+/**
+ * The earliest date to read entries from: the position's date, or, when only the recent sessions
+ * are wanted, the oldest of the last `lookbackDates` dates with entries up to `horizon` (a null
+ * `lookbackDates` is no limit). An entry is live while its own `deleted_at` is null: deleting a
+ * log stamps its entries too (deleteLog), so no join to logs is needed here.
+ */
+const entriesFrom = sql`greatest(${athletePositions.since}, (
+  select min(d.performed_on) from (
+    select distinct e.performed_on from log_entries e
+    where e.athlete_id = ${athletePositions.athleteId} and e.rung_id = ${athletePositions.rungId}
+      and e.deleted_at is null and e.performed_on >= ${athletePositions.since}
+      and e.performed_on <= ${sql.placeholder("horizon")}::date
+    order by e.performed_on desc
+    limit ${sql.placeholder("lookbackDates")}::int) d))`;
+
+/** The entries on the current rung from entriesFrom on, as the engine reads them. */
 const rungEntries = sql<Session[]>`(
   select coalesce(json_agg(json_build_object('date', e.performed_on, 'sets', e.sets, 'pain', e.pain)
     order by e.performed_on, e.created_at), '[]'::json)
-  from log_entries e join logs l on l.id = e.log_id
+  from log_entries e
   where e.athlete_id = ${athletePositions.athleteId} and e.rung_id = ${athletePositions.rungId}
-    and e.performed_on >= ${athletePositions.since} and e.deleted_at is null and l.deleted_at is null)`;
+    and e.performed_on >= ${entriesFrom} and e.deleted_at is null)`;
+
+/**
+ * The latest dates with pain on the current rung since the position's date, up to `horizon`,
+ * newest first: the first on or before the team's today is the last pain, however long ago.
+ */
+const painDates = sql<string[]>`(
+  select coalesce(json_agg(p.performed_on order by p.performed_on desc), '[]'::json) from (
+    select distinct e.performed_on from log_entries e
+    where e.athlete_id = ${athletePositions.athleteId} and e.rung_id = ${athletePositions.rungId}
+      and e.pain and e.deleted_at is null and e.performed_on >= ${athletePositions.since}
+      and e.performed_on <= ${sql.placeholder("horizon")}::date
+    order by e.performed_on desc
+    limit ${PAST_TODAY + 1}) p)`;
 
 const pendingProposal = sql<PositionContext["pending"]>`(
   select json_build_object('id', p.id, 'direction', p.direction) from promotions p
@@ -121,6 +161,7 @@ const contextOf = preparedVariants((database: Db, scope: Scope) =>
       prerequisites,
       pending: pendingProposal,
       entries: rungEntries,
+      painDates,
     })
     .from(athletePositions)
     .innerJoin(athletes, eq(athletes.id, athletePositions.athleteId))
@@ -132,25 +173,40 @@ const contextOf = preparedVariants((database: Db, scope: Scope) =>
     .prepare(`position_context_${scope}`),
 );
 
+export interface ContextOptions {
+  positionId: string;
+  /** Scopes the read to a team (a caller acting for one); the system (daily job, seed) passes none. */
+  teamId?: string;
+  /** Lock the position row FOR UPDATE first. */
+  lock?: boolean;
+  /** The instant the verdict is for (default now): entries after the team's date of it never count. */
+  asOf?: Date;
+  /** "recent" (default): the entries a verdict can use; "all": the rung's whole history (trends). */
+  history?: "recent" | "all";
+}
+
 /**
  * Reads one position with its ladder, rung, standard, neighbours, prerequisites, pending proposal
  * and the entries on its rung in one named statement, built once (the logging path runs it on every
- * log). `teamId` scopes the read for a caller acting for a team; the system (daily job, seed) passes
- * none. With `lock`, the position row is locked FOR UPDATE first, in its own statement, so this read
- * (a fresh snapshot) sees every move committed before the lock was granted; without, it submits
- * synchronously, so it can travel in a oneTrip.
+ * log). For a verdict it reads the entries of the most recent dates the standard can look at, so a
+ * log costs the same after years on a rung as on the first day. With `lock`, the position row is
+ * locked FOR UPDATE first, in its own statement, so this read (a fresh snapshot) sees every move
+ * committed before the lock was granted; without, it submits synchronously, so it can travel in a
+ * oneTrip.
  */
-export async function loadPositionContext(
-  q: Queryable,
-  options: { positionId: string; teamId?: string; lock?: boolean },
-): Promise<PositionContext | null> {
+export async function loadPositionContext(q: Queryable, options: ContextOptions): Promise<PositionContext | null> {
   const scope = options.teamId ? "team" : "system";
   const values = { positionId: options.positionId, teamId: options.teamId };
   if (options.lock) {
     const [locked] = await lockPosition(q, scope).execute(values);
     if (!locked) return null;
   }
-  const [row] = await contextOf(q, scope).execute(values);
+  const utcDate = (options.asOf ?? new Date()).toISOString().slice(0, 10);
+  const [row] = await contextOf(q, scope).execute({
+    ...values,
+    horizon: addDays(utcDate, 1),
+    lookbackDates: options.history === "all" ? null : RECENT_DATES,
+  });
   if (!row) return null;
 
   const hasStandard = row.standard !== null && row.standard.sets !== null;
@@ -165,5 +221,6 @@ export async function loadPositionContext(
     prerequisites: row.nextRung ? row.prerequisites : [],
     pending: row.pending,
     entries: row.entries,
+    painDates: row.painDates,
   };
 }

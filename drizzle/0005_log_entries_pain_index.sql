@@ -1,0 +1,1 @@
+CREATE INDEX "log_entries_pain_idx" ON "log_entries" USING btree ("athlete_id","rung_id","performed_on") WHERE "log_entries"."pain" and "log_entries"."deleted_at" is null;
