@@ -15,9 +15,19 @@ function connect(): Db {
   if (instance) return instance;
   const url = process.env.DATABASE_URL;
   if (!url) throw new Error("DATABASE_URL is not set");
-  // Pipeline mode: a statement goes out as soon as it is submitted, so a transaction can send several
-  // in one trip (db/one-trip.ts). Awaited one by one, statements behave exactly as without it.
-  pool = new Pool({ connectionString: url, max: Number(process.env.DATABASE_POOL_SIZE ?? 10), pipeline: true });
+  const max = Number(process.env.DATABASE_POOL_SIZE ?? 10);
+  pool = new Pool({
+    connectionString: url,
+    max,
+    // Connections stay open once made: a new one costs PostgreSQL a process and cold caches, and
+    // every named statement is parsed again on it, so a server whose pool emptied while quiet would
+    // answer its next burst slowly. Idle connections never keep a script from exiting.
+    min: max,
+    allowExitOnIdle: true,
+    // Pipeline mode: a statement goes out as soon as it is submitted, so a transaction can send
+    // several in one trip (db/one-trip.ts). Awaited one by one, statements behave as without it.
+    pipeline: true,
+  });
   instance = drizzle(pool, { schema });
   return instance;
 }
