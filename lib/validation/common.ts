@@ -32,14 +32,21 @@ export const zTimeZone = z
   .trim()
   .refine(isTimeZone, "Choose a time zone such as Europe/Lisbon.");
 
-/** A calendar date as typed or sent: YYYY-MM-DD, and a real day. */
+/** The earliest year a date may name: nothing this app records happened before it. */
+export const MIN_DATE_YEAR = 1900;
+
+/** A calendar date as typed or sent: YYYY-MM-DD, a real day, from MIN_DATE_YEAR on. */
 export const zDate = z
   .string()
   .regex(/^\d{4}-\d{2}-\d{2}$/, "Use the form YYYY-MM-DD.")
   .refine((value) => {
     const d = new Date(`${value}T00:00:00Z`);
     return !Number.isNaN(d.getTime()) && d.toISOString().slice(0, 10) === value;
-  }, "Not a real calendar date.");
+  }, "Not a real calendar date.")
+  .refine((value) => Number(value.slice(0, 4)) >= MIN_DATE_YEAR, `Use a date from ${MIN_DATE_YEAR} on.`);
+
+/** Text PostgreSQL can store: no NUL character (it refuses one in any text value). */
+export const zText = z.string().regex(/^[^\u0000]*$/, "Remove the NUL character.");
 
 /** List pagination: an opaque cursor and a page size. */
 export const zPageQuery = z.strictObject({

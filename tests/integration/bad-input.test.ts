@@ -4,7 +4,9 @@ import { GET as listAssignments } from "@/app/api/v1/athletes/[id]/assignments/r
 import { GET as listAthletes, POST as createAthlete } from "@/app/api/v1/athletes/route";
 import { GET as listBlocks } from "@/app/api/v1/blocks/route";
 import { GET as listLadders } from "@/app/api/v1/ladders/route";
+import { GET as listAthleteLogs } from "@/app/api/v1/athletes/[id]/logs/route";
 import { GET as listPlans } from "@/app/api/v1/plans/route";
+import { GET as listReadiness } from "@/app/api/v1/readiness/route";
 import { GET as listSquads } from "@/app/api/v1/squads/route";
 import { POST as signup } from "@/app/api/v1/signup/route";
 import { POST as createToken } from "@/app/api/v1/tokens/route";
@@ -71,6 +73,37 @@ describe("bad input never becomes a 500", () => {
     const byDate = forged({ startsOn: "soon", id: "x" });
     const res = await call(listAssignments, { token, params: { id: athleteId }, path: `/api/v1/athletes/${athleteId}/assignments?cursor=${byDate}` });
     expect(res.status).toBe(422);
+  });
+
+  it("answers 422 for cursors that look right but no database cast accepts", async () => {
+    const { owner, teamId } = await createTeam();
+    const token = await bearerFor(owner);
+    const athleteId = await createAthleteRecord(teamId);
+    const forged = (value: unknown) => Buffer.from(JSON.stringify(value)).toString("base64url");
+    const id = "00000000-0000-4000-8000-000000000000";
+    const cases: [string, Parameters<typeof call>[0], string, Record<string, string>?][] = [
+      ["month 13 in a timestamp", listAthleteLogs, `/api/v1/athletes/${athleteId}/logs?cursor=${forged({ d: "2026-12-01", at: "2026-13-45 99:99:99+00", id })}`, { id: athleteId }],
+      ["year 0", listAssignments, `/api/v1/athletes/${athleteId}/assignments?cursor=${forged({ startsOn: "0000-01-01", id })}`, { id: athleteId }],
+      ["a readiness past any int", listReadiness, `/api/v1/readiness?sort=readiness&cursor=${forged({ s: "readiness", k: 3_000_000_000, n: "a", id })}`],
+      ["a NUL in a name", listAthletes, `/api/v1/athletes?cursor=${forged({ name: "a\u0000b", id })}`],
+    ];
+    for (const [label, handler, path, params] of cases) {
+      const res = await call(handler, { token, path, params });
+      expect(res.status, label).toBe(422);
+      expect(res.data.error?.issues?.map((i) => i.path), label).toEqual(["cursor"]);
+    }
+  });
+
+  it("answers 400 for a NUL character in a body or a query string", async () => {
+    const { owner } = await createTeam();
+    const token = await bearerFor(owner);
+    const body = await call(createAthlete, { method: "POST", token, rawBody: '{"name":"Ana\\u0000"}', headers: { "content-type": "application/json" } });
+    expect(body.status).toBe(400);
+    // An escaped backslash before "u0000" is plain text, not a NUL.
+    const text = await call(createAthlete, { method: "POST", token, rawBody: '{"name":"Ana \\\\u0000"}', headers: { "content-type": "application/json" } });
+    expect(text.status).toBe(201);
+    const query = await call(listAthletes, { token, path: "/api/v1/athletes?q=a%00b" });
+    expect(query.status).toBe(400);
   });
 
   it("refuses oversized bodies with 413", async () => {

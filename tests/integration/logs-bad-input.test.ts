@@ -70,6 +70,9 @@ const CASES: [string, (c: Ctx) => Body, number, string?][] = [
   ["an unknown field", (c) => ({ performedOn: c.today, entries: [entry(c.hold, [{ value: 20, weight: 5 }])] }), 422, "entries.0.sets.0"],
   ["a date after tomorrow", (c) => ({ performedOn: addDays(c.today, 2), entries: [entry(c.hold, [{ value: 20 }])] }), 422, "performedOn"],
   ["a date that does not exist", () => ({ performedOn: "2026-02-30", entries: [] }), 422, "performedOn"],
+  // Year 0 is a date to JavaScript, not to PostgreSQL: it must stop at validation, not at the cast.
+  ["year 0", (c) => ({ performedOn: "0000-01-01", entries: [entry(c.hold, [{ value: 20 }])] }), 422, "performedOn"],
+  ["a NUL character in a note", (c) => ({ performedOn: c.today, entries: [entry(c.hold, [{ value: 20 }], { note: "sore\u0000wrist" })] }), 400],
   ["session RPE 12", (c) => ({ performedOn: c.today, sessionRpe: 12, entries: [entry(c.hold, [{ value: 20 }])] }), 422, "sessionRpe"],
   ["a 0-minute session", (c) => ({ performedOn: c.today, durationMinutes: 0, entries: [entry(c.hold, [{ value: 20 }])] }), 422, "durationMinutes"],
   ["a rung of a ladder the athlete is not on", (c) => ({ performedOn: c.today, entries: [entry(c.hold, [{ value: 20 }]), entry(c.unplaced, [{ value: 20 }])] }), 422, "entries.1.rungId"],

@@ -28,14 +28,22 @@ export async function readJson(request: Request, maxBytes: number): Promise<unkn
   });
   if (Buffer.byteLength(text) > maxBytes) throw new PayloadTooLarge(`Request body is larger than ${maxBytes} bytes.`);
   if (text.trim() === "") throw new BadRequest("Request body must be JSON.");
+  let value: unknown;
   try {
-    return JSON.parse(text) as unknown;
+    value = JSON.parse(text);
   } catch {
     throw new BadRequest("Request body is not valid JSON.");
   }
+  // PostgreSQL stores no NUL in text, so no field may carry one (a "\u0000" escape, not an escaped backslash).
+  if (text.includes("\\u0000") && ESCAPED_NUL.test(text)) throw new BadRequest("Request body must not contain NUL characters.");
+  return value;
 }
+
+const ESCAPED_NUL = /(?<!\\)(?:\\\\)*\\u0000/;
 
 /** Query parameters as a plain object (repeated keys keep the last value). */
 export function searchParamsObject(url: URL): Record<string, string> {
-  return Object.fromEntries(url.searchParams.entries());
+  const params = Object.fromEntries(url.searchParams.entries());
+  if (Object.values(params).some((value) => value.includes("\u0000"))) throw new BadRequest("Query string must not contain NUL characters.");
+  return params;
 }

@@ -2,7 +2,8 @@ import "server-only";
 import { z } from "zod";
 import { db } from "@/db/client";
 import type { Actor } from "@/lib/server/actor";
-import { decodeCursor, encodeCursor } from "@/lib/server/http/cursor";
+import { decodeCursor, encodeCursor, zPgDate } from "@/lib/server/http/cursor";
+import { zText } from "@/lib/validation/common";
 import { invalidField } from "@/lib/errors";
 import { type ReadinessCell, type ReadinessPage, type ReadinessQuery, type ReadinessRow } from "@/lib/validation/readiness";
 import { readinessStatement, type ReadinessCursor } from "./readiness-sql";
@@ -10,10 +11,11 @@ import { reviewWeek, type ReviewWeek } from "./readiness-week";
 
 /** The sort key's type follows the sort, so a forged cursor is a 422 rather than a failed cast. */
 const zCursor = z.union([
-  z.object({ s: z.enum(["name", "-name"]), k: z.string() }),
-  z.object({ s: z.enum(["readiness", "-readiness"]), k: z.number().int() }),
-  z.object({ s: z.enum(["lastSession", "-lastSession"]), k: z.iso.date() }),
-]).and(z.object({ n: z.string(), id: z.uuid() })) satisfies z.ZodType<ReadinessCursor>;
+  z.object({ s: z.enum(["name", "-name"]), k: zText }),
+  // Readiness runs 0–100; an athlete with no figure sorts as 101 or -1 (readiness-sql.ts).
+  z.object({ s: z.enum(["readiness", "-readiness"]), k: z.number().int().min(-1).max(101) }),
+  z.object({ s: z.enum(["lastSession", "-lastSession"]), k: zPgDate }),
+]).and(z.object({ n: zText, id: z.uuid() })) satisfies z.ZodType<ReadinessCursor>;
 
 interface RawRow extends Record<string, unknown> {
   id: string;
