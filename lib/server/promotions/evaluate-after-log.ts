@@ -50,5 +50,5 @@ export async function evaluateLoaded(
     if (evaluation.verdict.promotedTo !== null || (evaluation.verdict.achieved === true && ctx.position.achievedAt === null)) moved = true;
     evaluations.push(evaluation);
   }
-  return { verdicts: evaluations.map((e) => e.verdict), figures: () => evaluations.map((e) => e.figures()) };
+  return { verdicts: evaluations.map((e) => e.verdict), figures: () => evaluations.flatMap((e) => e.figures()) };
 }

@@ -58,14 +58,17 @@ export async function evaluatePosition(tx: Tx, input: EvaluatePositionInput): Pr
   const ctx = await loadPositionContext(tx, { positionId: input.positionId, teamId, lock: !input.locked, asOf: input.asOf });
   if (!ctx) throw new NotFound("position");
   const { verdict, figures } = await evaluateContext(tx, ctx, input);
-  await figures();
+  await Promise.all(figures());
   return verdict;
 }
 
 export interface Evaluation {
   verdict: VerdictDto;
-  /** Sends the position's derived-figures update (submits synchronously; see oneTrip). */
-  figures: () => Promise<unknown>;
+  /**
+   * Sends the position's derived-figures update and returns its statements, none when there is
+   * nothing to update (submits synchronously; see oneTrip, whose last trip counts what was sent).
+   */
+  figures: () => Promise<unknown>[];
 }
 
 /**
@@ -76,14 +79,14 @@ export async function evaluateContext(tx: Tx, ctx: PositionContext, input: Omit<
   const judged = judgePosition(ctx, input.asOf);
   const outcome = await act(tx, ctx, judged, input);
   const verdict = toVerdictDto({ ladderId: ctx.ladder.id, rungId: ctx.rung.id }, judged.verdict, judged.explanation, outcome);
-  if (!outcome.promotedTo) return { verdict, figures: () => writeFigures(tx, ctx, judged, outcome) };
+  if (!outcome.promotedTo) return { verdict, figures: () => [writeFigures(tx, ctx, judged, outcome)] };
 
   // The athlete is on a new rung: its figures start from the evidence there (usually none yet).
   const moved = await loadPositionContext(tx, { positionId: ctx.position.id, asOf: input.asOf });
-  if (!moved) return { verdict, figures: () => Promise.resolve() };
+  if (!moved) return { verdict, figures: () => [] };
   const fresh = judgePosition(moved, input.asOf);
   const movedOutcome = { ...outcome, pendingDirection: moved.pending?.direction ?? null, achieved: false };
-  return { verdict, figures: () => writeFigures(tx, moved, fresh, movedOutcome) };
+  return { verdict, figures: () => [writeFigures(tx, moved, fresh, movedOutcome)] };
 }
 
 async function act(tx: Tx, ctx: PositionContext, judged: Judgement, input: Omit<EvaluatePositionInput, "positionId">): Promise<Outcome> {
