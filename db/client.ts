@@ -19,10 +19,11 @@ function connect(): Db {
   pool = new Pool({
     connectionString: url,
     max,
-    // Connections stay open once made: a new one costs PostgreSQL a process and cold caches, and
-    // every named statement is parsed again on it, so a server whose pool emptied while quiet would
-    // answer its next burst slowly. Idle connections never keep a script from exiting.
-    min: max,
+    // Idle connections are kept for minutes, not pg's default 10 s: a new one costs PostgreSQL a
+    // process and cold caches, and every named statement is parsed again on it, so a server whose
+    // pool emptied in a quiet spell would answer its next burst slowly. After a long quiet the pool
+    // shrinks again, and idle connections never keep a script from exiting.
+    idleTimeoutMillis: 5 * 60_000,
     allowExitOnIdle: true,
     // Pipeline mode: a statement goes out as soon as it is submitted, so a transaction can send
     // several in one trip (db/one-trip.ts). Awaited one by one, statements behave as without it.

@@ -15,6 +15,8 @@ const FLOOR_DATE = "2000-01-01"; // floor rows are told apart by date and remove
  * re-planned on fresh statistics; neither is the steady state the run is meant to show.
  */
 const LEAD_IN = 3;
+/** A paced request with no answer after this long counts as an error (autocannon's default timeout). */
+const REQUEST_TIMEOUT_MS = 10_000;
 
 /** A team, 50 athletes on one rung whose standard one post never meets, a token. */
 async function seed(baseUrl, dbUrl) {
@@ -154,17 +156,27 @@ async function paced(baseUrl, world, { seconds, rate, connections, days }, sampl
         (response) => {
           response.resume();
           response.on("end", () => {
+            settled = true;
             latencies.push(performance.now() - due);
             statuses[response.statusCode] = (statuses[response.statusCode] ?? 0) + 1;
             if (response.statusCode >= 300) errors += 1;
             resolve();
           });
+          // A response cut off mid-way ends with "close" and no "end": an error, and settled.
+          response.on("close", () => {
+            if (!response.complete) failed();
+          });
         },
       );
-      request.on("error", () => {
+      let settled = false;
+      const failed = () => {
+        if (settled) return;
+        settled = true;
         errors += 1;
         resolve();
-      });
+      };
+      request.setTimeout(REQUEST_TIMEOUT_MS, () => request.destroy(new Error("timed out")));
+      request.on("error", failed);
       request.end(body);
     });
     inFlight.add(done);
