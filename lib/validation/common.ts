@@ -35,14 +35,17 @@ export const zTimeZone = z
 /** The earliest year a date may name: nothing this app records happened before it. */
 export const MIN_DATE_YEAR = 1900;
 
+/** True for a YYYY-MM-DD that names a real day. */
+export function isRealDay(value: string): boolean {
+  const d = new Date(`${value}T00:00:00Z`);
+  return !Number.isNaN(d.getTime()) && d.toISOString().slice(0, 10) === value;
+}
+
 /** A calendar date as typed or sent: YYYY-MM-DD, a real day, from MIN_DATE_YEAR on. */
 export const zDate = z
   .string()
   .regex(/^\d{4}-\d{2}-\d{2}$/, "Use the form YYYY-MM-DD.")
-  .refine((value) => {
-    const d = new Date(`${value}T00:00:00Z`);
-    return !Number.isNaN(d.getTime()) && d.toISOString().slice(0, 10) === value;
-  }, "Not a real calendar date.")
+  .refine(isRealDay, "Not a real calendar date.")
   .refine((value) => Number(value.slice(0, 4)) >= MIN_DATE_YEAR, `Use a date from ${MIN_DATE_YEAR} on.`);
 
 /** Text PostgreSQL can store: no NUL character (it refuses one in any text value). */

@@ -6,11 +6,12 @@ import { assignments, athletes } from "@/db/schema";
 import { NotFound } from "@/lib/errors";
 import type { Actor } from "@/lib/server/actor";
 import { visibleAthletes } from "@/lib/server/athletes/athlete-scope";
-import { decodeCursor, pageOf, zPgDate } from "@/lib/server/http/cursor";
+import { zDate } from "@/lib/validation/common";
+import { decodeCursor, pageOf } from "@/lib/server/http/cursor";
 import type { ZAssignmentListQuery } from "@/lib/validation/plans";
 import { selectAssignments, toAssignmentDto } from "./assignment-dto";
 
-const zCursor = z.object({ startsOn: zPgDate, id: z.uuid() });
+const zCursor = z.object({ startsOn: zDate, id: z.uuid() });
 
 /** An athlete's assignments, latest start first. Staff see any athlete of the team; an athlete only their own. */
 export async function listAssignments(actor: Actor, athleteId: string, query: z.output<typeof ZAssignmentListQuery>) {

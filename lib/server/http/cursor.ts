@@ -1,7 +1,7 @@
 import "server-only";
 import { z } from "zod";
 import { Unprocessable } from "@/lib/errors";
-import { MIN_DATE_YEAR, zText } from "@/lib/validation/common";
+import { isRealDay, MIN_DATE_YEAR, zText } from "@/lib/validation/common";
 
 /** Opaque keyset cursors: base64url JSON of the last row's sort key. */
 export function encodeCursor(value: unknown): string {
@@ -39,16 +39,8 @@ export const zPgTimestamp = z
   .refine((value) => {
     const [date, time] = value.split(" ") as [string, string];
     const [hours, minutes, seconds] = time.slice(0, 8).split(":").map(Number) as [number, number, number];
-    return isRealDate(date) && hours < 24 && minutes < 60 && seconds < 60;
+    return isRealDay(date) && Number(date.slice(0, 4)) >= MIN_DATE_YEAR && hours < 24 && minutes < 60 && seconds < 60;
   });
-
-/** A YYYY-MM-DD a PostgreSQL date cast accepts: a real day, from MIN_DATE_YEAR on. */
-export const zPgDate = z.iso.date().refine(isRealDate);
-
-function isRealDate(date: string): boolean {
-  const d = new Date(`${date}T00:00:00Z`);
-  return !Number.isNaN(d.getTime()) && d.toISOString().slice(0, 10) === date && d.getUTCFullYear() >= MIN_DATE_YEAR;
-}
 
 /** Name-ordered lists; the id is checked so a forged cursor is a 422, never a failed uuid cast. */
 export const zNameIdCursor = z.object({ name: zText, id: z.uuid() });

@@ -6,12 +6,13 @@ import { db } from "@/db/client";
 import { logs } from "@/db/schema";
 import type { Actor } from "@/lib/server/actor";
 import { getAthlete } from "@/lib/server/athletes/get-athlete";
-import { decodeCursor, pageOf, zPgDate, zPgTimestamp } from "@/lib/server/http/cursor";
+import { zDate } from "@/lib/validation/common";
+import { decodeCursor, pageOf, zPgTimestamp } from "@/lib/server/http/cursor";
 import type { LogDto, ZLogsQuery } from "@/lib/validation/logs";
 import { entriesOf, toLogDto } from "./log-dto";
 
 /** The last row's sort key: date, then created_at as text (see zPgTimestamp), then id. */
-const zLogCursor = z.object({ d: zPgDate, at: zPgTimestamp, id: z.uuid() });
+const zLogCursor = z.object({ d: zDate, at: zPgTimestamp, id: z.uuid() });
 
 /** GET /api/v1/athletes/{id}/logs: newest first (by date, then by when posted), with entries, a page at a time. */
 export async function listAthleteLogs(actor: Actor, athleteId: string, query: Z.output<typeof ZLogsQuery>) {

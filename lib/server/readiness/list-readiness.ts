@@ -2,8 +2,8 @@ import "server-only";
 import { z } from "zod";
 import { db } from "@/db/client";
 import type { Actor } from "@/lib/server/actor";
-import { decodeCursor, encodeCursor, zPgDate } from "@/lib/server/http/cursor";
-import { zText } from "@/lib/validation/common";
+import { decodeCursor, encodeCursor } from "@/lib/server/http/cursor";
+import { zDate, zText } from "@/lib/validation/common";
 import { invalidField } from "@/lib/errors";
 import { type ReadinessCell, type ReadinessPage, type ReadinessQuery, type ReadinessRow } from "@/lib/validation/readiness";
 import { readinessStatement, type ReadinessCursor } from "./readiness-sql";
@@ -14,7 +14,7 @@ const zCursor = z.union([
   z.object({ s: z.enum(["name", "-name"]), k: zText }),
   // Readiness runs 0–100; an athlete with no figure sorts as 101 or -1 (readiness-sql.ts).
   z.object({ s: z.enum(["readiness", "-readiness"]), k: z.number().int().min(-1).max(101) }),
-  z.object({ s: z.enum(["lastSession", "-lastSession"]), k: zPgDate }),
+  z.object({ s: z.enum(["lastSession", "-lastSession"]), k: zDate }),
 ]).and(z.object({ n: zText, id: z.uuid() })) satisfies z.ZodType<ReadinessCursor>;
 
 interface RawRow extends Record<string, unknown> {
