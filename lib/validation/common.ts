@@ -33,10 +33,10 @@ export const zTimeZone = z
   .refine(isTimeZone, "Choose a time zone such as Europe/Lisbon.");
 
 /** The earliest year a date may name: nothing this app records happened before it. */
-export const MIN_DATE_YEAR = 1900;
+const MIN_DATE_YEAR = 1900;
 
 /** True for a YYYY-MM-DD that names a real day. */
-export function isRealDay(value: string): boolean {
+function isRealDay(value: string): boolean {
   const d = new Date(`${value}T00:00:00Z`);
   return !Number.isNaN(d.getTime()) && d.toISOString().slice(0, 10) === value;
 }

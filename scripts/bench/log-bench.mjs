@@ -286,6 +286,16 @@ async function settle(dbUrl) {
   await c.end();
 }
 
+/**
+ * A run from a settled database: LEAD_IN seconds at its own load, uncounted, then `seconds`
+ * measured. `run(seconds, sample)` keeps replay candidates in `sample` (none from the lead-in).
+ */
+async function afterLeadIn(dbUrl, seconds, sample, run) {
+  await settle(dbUrl);
+  await run(LEAD_IN, []);
+  return run(seconds, sample);
+}
+
 /** One request at a time: the latency of the request path itself, without queueing. */
 async function sequential(baseUrl, world, days, count = 30) {
   const latencies = [];
@@ -317,19 +327,11 @@ export async function logBench({ baseUrl, dbUrl, seconds }) {
   const sample = [];
   // Warm the route (first compile of lazy chunks, pools) so it does not count against the runs.
   await hammer(baseUrl, world, { seconds: 3, connections: 10, days }, []);
-  // Every run starts from a settled database and runs LEAD_IN seconds at its own load uncounted.
-  await settle(dbUrl);
-  await floor(dbUrl, world, LEAD_IN);
-  const floorResult = await floor(dbUrl, world, seconds);
-  await settle(dbUrl);
-  await hammer(baseUrl, world, { seconds: LEAD_IN, connections: 50, days }, []);
-  const saturated = await hammer(baseUrl, world, { seconds, connections: 50, days }, sample);
-  await settle(dbUrl);
-  await paced(baseUrl, world, { seconds: LEAD_IN, connections: 10, rate: 200, days }, []);
-  const fixed = await paced(baseUrl, world, { seconds, connections: 10, rate: 200, days }, sample);
-  await settle(dbUrl);
-  await hammer(baseUrl, world, { seconds: LEAD_IN, connections: 10, rate: 200, days }, []);
-  const bursts = await hammer(baseUrl, world, { seconds, connections: 10, rate: 200, days }, sample);
+  const measured = (run) => afterLeadIn(dbUrl, seconds, sample, run);
+  const floorResult = await measured((s) => floor(dbUrl, world, s));
+  const saturated = await measured((s, kept) => hammer(baseUrl, world, { seconds: s, connections: 50, days }, kept));
+  const fixed = await measured((s, kept) => paced(baseUrl, world, { seconds: s, connections: 10, rate: 200, days }, kept));
+  const bursts = await measured((s, kept) => hammer(baseUrl, world, { seconds: s, connections: 10, rate: 200, days }, kept));
   const replay = await replays(baseUrl, dbUrl, world, sample);
   const reference = await framework(baseUrl, world, seconds);
   const ratio = saturated.rps / floorResult.rps;

@@ -1,7 +1,7 @@
 import "server-only";
 import { z } from "zod";
 import { Unprocessable } from "@/lib/errors";
-import { isRealDay, MIN_DATE_YEAR, zText } from "@/lib/validation/common";
+import { zDate, zText } from "@/lib/validation/common";
 
 /** Opaque keyset cursors: base64url JSON of the last row's sort key. */
 export function encodeCursor(value: unknown): string {
@@ -39,7 +39,7 @@ export const zPgTimestamp = z
   .refine((value) => {
     const [date, time] = value.split(" ") as [string, string];
     const [hours, minutes, seconds] = time.slice(0, 8).split(":").map(Number) as [number, number, number];
-    return isRealDay(date) && Number(date.slice(0, 4)) >= MIN_DATE_YEAR && hours < 24 && minutes < 60 && seconds < 60;
+    return zDate.safeParse(date).success && hours < 24 && minutes < 60 && seconds < 60;
   });
 
 /** Name-ordered lists; the id is checked so a forged cursor is a 422, never a failed uuid cast. */
