@@ -7,6 +7,8 @@ import { oneTrip, transactionInTrips, type TripsResult } from "@/db/one-trip";
 import { preparedOnce, preparedSql } from "@/db/prepared";
 import { idempotencyKeys } from "@/db/schema";
 import { BadRequest, Conflict } from "@/lib/errors";
+import type { Actor } from "@/lib/server/actor";
+import { confirmActor } from "@/lib/server/auth/recent-token-actors";
 
 /** Keys are kept at least this long; older ones are swept now and then. */
 const KEEP_HOURS = 24;
@@ -39,8 +41,8 @@ export function requestHash(body: unknown): string {
 }
 
 export interface IdempotentRequest {
-  /** The caller (a user id): keys never collide across people. */
-  ownerId: string;
+  /** The caller: keys never collide across people. One taken unconfirmed is confirmed in the first trip. */
+  actor: Actor;
   /** The route, e.g. "POST /api/v1/logs". */
   scope: string;
   key: string;
@@ -90,15 +92,19 @@ export async function withIdempotency<R>(request: IdempotentRequest, operation: 
   sweepNowAndThen();
   const hash = requestHash(request.body);
   const key: KeyPlaceholders = {
-    lockKey: `${request.ownerId}\n${request.scope}\n${request.key}`,
-    keyOwner: request.ownerId,
+    lockKey: `${request.actor.userId}\n${request.scope}\n${request.key}`,
+    keyOwner: request.actor.userId,
     keyScope: request.scope,
     keyName: request.key,
   };
   type Outcome = { replay: { status: number; body: unknown } } | { replay: null; value: unknown };
   const outcome = await transactionInTrips(async (tx): Promise<TripsResult<Outcome>> => {
-    // BEGIN, the claim and the operation's reads go out together.
-    const [claimId, read] = await oneTrip(tx, () => [claim(tx, request, hash, key.lockKey), operation.read(tx, key)] as const);
+    // BEGIN, the actor's confirmation (when it was not read fresh), the claim and the operation's
+    // reads go out together; nothing is written before all three are back.
+    const [, claimId, read] = await oneTrip(
+      tx,
+      () => [confirmActor(tx, request.actor), claim(tx, request, hash, key.lockKey), operation.read(tx, key)] as const,
+    );
     if (!claimId) return { value: { replay: await storedAnswer(tx, request, hash) } };
     const { value, last } = await operation.write(tx, read);
     // The operation's last statements, the stored answer and COMMIT go out together.
@@ -154,7 +160,7 @@ const markDone = preparedOnce((database: Db) =>
 /** The claim's id, or null when the key is taken (stored, or held by a request still running). */
 function claim(tx: Tx, request: IdempotentRequest, hash: string, lockKey: string): Promise<string | null> {
   return claimKey(tx)
-    .execute({ ownerId: request.ownerId, scope: request.scope, key: request.key, hash, lockKey })
+    .execute({ ownerId: request.actor.userId, scope: request.scope, key: request.key, hash, lockKey })
     .then((result) => result.rows[0]?.id ?? null);
 }
 
@@ -172,7 +178,7 @@ async function storedAnswer(tx: Tx, request: IdempotentRequest, hash: string): P
     })
     .from(idempotencyKeys)
     .where(
-      and(eq(idempotencyKeys.ownerId, request.ownerId), eq(idempotencyKeys.scope, request.scope), eq(idempotencyKeys.key, request.key)),
+      and(eq(idempotencyKeys.ownerId, request.actor.userId), eq(idempotencyKeys.scope, request.scope), eq(idempotencyKeys.key, request.key)),
     );
   if (row && row.requestHash !== hash) throw new Conflict("This Idempotency-Key was already used with a different body.");
   if (!row || row.state !== "done") throw new Conflict("A request with this Idempotency-Key is still being processed; retry shortly.");

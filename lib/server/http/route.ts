@@ -4,7 +4,8 @@ import type { z } from "zod";
 import { Forbidden, NotFound } from "@/lib/errors";
 import { can, type Permission } from "@/lib/permissions";
 import type { Actor } from "@/lib/server/actor";
-import { requireRequestActor } from "@/lib/server/auth/request-actor";
+import { isConfirmed } from "@/lib/server/auth/recent-token-actors";
+import { recentRequestActor, requireRequestActor } from "@/lib/server/auth/request-actor";
 import { errorResponse } from "./error-response";
 import { parseWith, readJson, searchParamsObject } from "./parse";
 
@@ -23,6 +24,12 @@ interface InputOptions<B extends z.ZodType | undefined, Q extends z.ZodType | un
 interface RouteOptions<B extends z.ZodType | undefined, Q extends z.ZodType | undefined> extends InputOptions<B, Q> {
   /** Permission the actor's role needs; the operation still scopes rows to the actor's team. */
   can: Permission;
+  /**
+   * The handler confirms the actor inside its transaction (a keyed write through withIdempotency),
+   * so a Bearer token seen lately may skip its own read before the transaction. Any failure before
+   * the confirmation runs the request again with a fresh read.
+   */
+  confirmsActor?: boolean;
 }
 
 interface Input<B, Q> {
@@ -72,11 +79,24 @@ export function route<B extends z.ZodType | undefined = undefined, Q extends z.Z
   handler: (context: Input<Infer<B>, Infer<Q>> & { actor: Actor }) => Promise<unknown>,
 ) {
   return async (request: NextRequest, context: { params: Promise<Params> }): Promise<Response> => {
-    try {
-      const actor = await requireRequestActor(request);
+    // The body is read once, even when the request runs twice.
+    let input: Promise<Input<Infer<B>, Infer<Q>>> | undefined;
+    const run = async (actor: Actor) => {
       if (!can(actor.role, options.can)) throw new Forbidden();
-      const input = await readInput(options, request, context);
-      return toResponse(await handler({ ...input, actor }), options.status ?? 200);
+      input ??= readInput(options, request, context);
+      return toResponse(await handler({ ...(await input), actor }), options.status ?? 200);
+    };
+    try {
+      const recent = options.confirmsActor ? recentRequestActor(request) : null;
+      if (recent) {
+        try {
+          return await run(recent);
+        } catch (error) {
+          if (isConfirmed(recent)) throw error;
+          // Unconfirmed (stale, or failed before the check came back): decide on a fresh read.
+        }
+      }
+      return await run(await requireRequestActor(request));
     } catch (error) {
       return errorResponse(error);
     }

@@ -70,7 +70,7 @@ export function createLog(actor: Actor, key: string, input: CreateLog): Promise<
   const athleteId = logAthleteOf(actor, input.athleteId);
   const rungIds = input.entries.map((e) => e.rungId);
   return withIdempotency(
-    { ownerId: actor.userId, scope: CREATE_LOG_SCOPE, key, body: input, status: 201 },
+    { actor, scope: CREATE_LOG_SCOPE, key, body: input, status: 201 },
     {
       read: (tx, key) => lockPlacedRungs(tx, actor.teamId, athleteId, rungIds, key),
       write: (tx, placed) => writeLog(tx, actor, { ...input, athleteId }, placed),
