@@ -1,3 +1,4 @@
+import os from "node:os";
 import { drizzle, type NodePgDatabase } from "drizzle-orm/node-postgres";
 import { Pool } from "pg";
 import * as schema from "./schema";
@@ -8,6 +9,17 @@ export type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
 /** Either the pool-backed database or an open transaction. */
 export type Queryable = Db | Tx;
 
+/**
+ * Connections when DATABASE_POOL_SIZE is unset: twice this machine's cores plus one. More than the
+ * database can run at once only moves the queue into PostgreSQL, where waiting costs more than in
+ * the pool (PostgreSQL wiki, "Number Of Database Connections": core_count × 2 + effective spindle
+ * count as a starting point). The cores counted are the app's; set DATABASE_POOL_SIZE when the
+ * database runs on another machine.
+ */
+export function defaultPoolSize(): number {
+  return os.availableParallelism() * 2 + 1;
+}
+
 let pool: Pool | undefined;
 let instance: Db | undefined;
 
@@ -15,7 +27,7 @@ function connect(): Db {
   if (instance) return instance;
   const url = process.env.DATABASE_URL;
   if (!url) throw new Error("DATABASE_URL is not set");
-  const max = Number(process.env.DATABASE_POOL_SIZE ?? 10);
+  const max = Number(process.env.DATABASE_POOL_SIZE || defaultPoolSize());
   pool = new Pool({
     connectionString: url,
     max,

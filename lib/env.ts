@@ -7,7 +7,8 @@ import { z } from "zod";
 export const ZEnv = z.object({
   NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
   DATABASE_URL: z.url({ protocol: /^postgres(ql)?$/, error: "DATABASE_URL must be a postgres:// URL" }),
-  DATABASE_POOL_SIZE: z.coerce.number().int().min(1).max(200).default(10),
+  // Unset: twice the cores plus one (db/client.ts, defaultPoolSize).
+  DATABASE_POOL_SIZE: z.coerce.number().int().min(1).max(200).optional(),
   AUTH_SECRET: z.string().min(32, "AUTH_SECRET must be at least 32 characters"),
   APP_URL: z.url({ protocol: /^https?$/, error: "APP_URL must be the absolute URL people open, e.g. http://localhost:3000" }),
   PASSWORD_HASH_COST: z.coerce.number().int().min(4).max(15).default(12),
