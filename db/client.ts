@@ -12,9 +12,9 @@ export type Queryable = Db | Tx;
 /**
  * Connections when DATABASE_POOL_SIZE is unset: twice this machine's cores plus one. More than the
  * database can run at once only moves the queue into PostgreSQL, where waiting costs more than in
- * the pool (PostgreSQL wiki, "Number Of Database Connections": core_count × 2 + effective spindle
- * count as a starting point). The cores counted are the app's; set DATABASE_POOL_SIZE when the
- * database runs on another machine.
+ * the pool (HikariCP wiki, "About Pool Sizing", after the PostgreSQL project's formula: core_count
+ * × 2 + effective_spindle_count as a starting point). The cores counted are the app's; set
+ * DATABASE_POOL_SIZE when the database runs on another machine.
  */
 export function defaultPoolSize(): number {
   return os.availableParallelism() * 2 + 1;
