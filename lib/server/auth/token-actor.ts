@@ -72,14 +72,11 @@ export async function actorFromApiToken(token: string): Promise<Actor | null> {
   return actor;
 }
 
-const sameActor = (a: Actor, b: Actor) =>
-  a.userId === b.userId &&
-  a.teamId === b.teamId &&
-  a.role === b.role &&
-  a.athleteId === b.athleteId &&
-  a.name === b.name &&
-  a.email === b.email &&
-  a.timeZone === b.timeZone;
+/** Every field the same (an actor holds plain values only), so a field added later is compared too. */
+function sameActor(a: Actor, b: Actor): boolean {
+  const keys = Object.keys(a) as (keyof Actor)[];
+  return keys.length === Object.keys(b).length && keys.every((key) => a[key] === b[key]);
+}
 
 /**
  * The actor a token resolved to in this process during the last minute, not yet confirmed: for a
