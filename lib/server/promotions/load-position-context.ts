@@ -89,27 +89,29 @@ const prerequisites = sql<PrerequisiteState[]>`(
     order by r.position limit 1))`;
 
 /**
- * The earliest date to read entries from: the position's date, or, when only the recent sessions
- * are wanted, the oldest of the last `lookbackDates` dates with entries up to `horizon` (a null
- * `lookbackDates` is no limit). An entry is live while its own `deleted_at` is null: deleting a
- * log stamps its entries too (deleteLog), so no join to logs is needed here.
+ * The earliest date of the recent entries: the oldest of the last RECENT_DATES dates with entries
+ * up to `horizon`, or the position's date when there are fewer. An entry is live while its own
+ * `deleted_at` is null: deleting a log stamps its entries too (deleteLog), so no join to logs is
+ * needed here.
  */
-const entriesFrom = sql`greatest(${athletePositions.since}, (
+const recentFrom = sql`greatest(${athletePositions.since}, (
   select min(d.performed_on) from (
     select distinct e.performed_on from log_entries e
     where e.athlete_id = ${athletePositions.athleteId} and e.rung_id = ${athletePositions.rungId}
       and e.deleted_at is null and e.performed_on >= ${athletePositions.since}
       and e.performed_on <= ${sql.placeholder("horizon")}::date
     order by e.performed_on desc
-    limit ${sql.placeholder("lookbackDates")}::int) d))`;
+    limit ${RECENT_DATES}) d))`;
 
-/** The entries on the current rung from entriesFrom on, as the engine reads them. */
-const rungEntries = sql<Session[]>`(
+type History = NonNullable<ContextOptions["history"]>;
+
+/** The entries on the current rung, as the engine reads them: the recent ones, or all since the position's date. */
+const rungEntries = (history: History) => sql<Session[]>`(
   select coalesce(json_agg(json_build_object('date', e.performed_on, 'sets', e.sets, 'pain', e.pain)
     order by e.performed_on, e.created_at), '[]'::json)
   from log_entries e
   where e.athlete_id = ${athletePositions.athleteId} and e.rung_id = ${athletePositions.rungId}
-    and e.performed_on >= ${entriesFrom} and e.deleted_at is null)`;
+    and e.performed_on >= ${history === "all" ? athletePositions.since : recentFrom} and e.deleted_at is null)`;
 
 /**
  * The latest dates with pain on the current rung since the position's date, up to `horizon`,
@@ -138,8 +140,10 @@ const lockPosition = preparedVariants((database: Db, scope: Scope) =>
   database.select({ id: athletePositions.id }).from(athletePositions).where(positionScope(scope)).for("update").prepare(`lock_position_${scope}`),
 );
 
-const contextOf = preparedVariants((database: Db, scope: Scope) =>
-  database
+/** One statement per scope and history, each built once (variant "team:recent", "system:all", …). */
+const contextOf = preparedVariants((database: Db, variant: `${Scope}:${History}`) => {
+  const [scope, history] = variant.split(":") as [Scope, History];
+  return database
     .select({
       position: {
         id: athletePositions.id,
@@ -160,7 +164,7 @@ const contextOf = preparedVariants((database: Db, scope: Scope) =>
       previousRung,
       prerequisites,
       pending: pendingProposal,
-      entries: rungEntries,
+      entries: rungEntries(history),
       painDates,
     })
     .from(athletePositions)
@@ -170,8 +174,8 @@ const contextOf = preparedVariants((database: Db, scope: Scope) =>
     .innerJoin(teams, eq(teams.id, athletePositions.teamId))
     .leftJoin(standards, eq(standards.rungId, rungs.id))
     .where(positionScope(scope))
-    .prepare(`position_context_${scope}`),
-);
+    .prepare(`position_context_${scope}_${history}`);
+});
 
 export interface ContextOptions {
   positionId: string;
@@ -202,11 +206,7 @@ export async function loadPositionContext(q: Queryable, options: ContextOptions)
     if (!locked) return null;
   }
   const utcDate = (options.asOf ?? new Date()).toISOString().slice(0, 10);
-  const [row] = await contextOf(q, scope).execute({
-    ...values,
-    horizon: addDays(utcDate, 1),
-    lookbackDates: options.history === "all" ? null : RECENT_DATES,
-  });
+  const [row] = await contextOf(q, `${scope}:${options.history ?? "recent"}`).execute({ ...values, horizon: addDays(utcDate, 1) });
   if (!row) return null;
 
   const hasStandard = row.standard !== null && row.standard.sets !== null;
