@@ -5,7 +5,9 @@ import { db } from "@/db/client";
 import { apiTokens, logs, teams, users } from "@/db/schema";
 import { localDateOf } from "@/lib/engine/local-date";
 import { recentTokenActor } from "@/lib/server/auth/token-actor";
+import { route } from "@/lib/server/http/route";
 import { bearerFor, createMember, createTeam } from "../support/factories";
+import { call } from "../support/http";
 import { placeOn, postLogAs } from "../support/logging-factories";
 
 // A Bearer token seen within the last minute skips its own read before POST /api/v1/logs and is
@@ -82,5 +84,11 @@ describe("POST /api/v1/logs with a token seen lately", () => {
     const { athlete, token } = await warmSetup();
     await db.update(apiTokens).set({ revokedAt: new Date() }).where(eq(apiTokens.userId, athlete.actor.userId));
     expect((await postLogAs(token, { performedOn: "not a date", entries: [] })).status).toBe(401);
+  });
+
+  it("refuses to answer from a route that takes a recent token but never confirms it", async () => {
+    const { token } = await warmSetup();
+    const unconfirmed = route({ can: "logs.write", confirmsActor: true }, async ({ actor }) => ({ userId: actor.userId }));
+    expect((await call(unconfirmed, { method: "POST", path: "/api/v1/unconfirmed", token })).status).toBe(500);
   });
 });

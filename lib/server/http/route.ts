@@ -89,12 +89,14 @@ export function route<B extends z.ZodType | undefined = undefined, Q extends z.Z
     try {
       const recent = options.confirmsActor ? recentRequestActor(request) : null;
       if (recent) {
-        try {
-          return await run(recent);
-        } catch (error) {
+        // Unconfirmed failures (stale, or failed before the check came back) decide on a fresh read.
+        const answered = await run(recent).catch((error: unknown) => {
           if (isConfirmed(recent)) throw error;
-          // Unconfirmed (stale, or failed before the check came back): decide on a fresh read.
-        }
+          return null;
+        });
+        // An answer without a confirmation is a route that set confirmsActor without withIdempotency.
+        if (answered && !isConfirmed(recent)) throw new Error("A confirmsActor route answered without confirming its actor.");
+        if (answered) return answered;
       }
       return await run(await requireRequestActor(request));
     } catch (error) {
