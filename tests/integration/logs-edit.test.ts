@@ -5,6 +5,7 @@ import { db } from "@/db/client";
 import { athletePositions, auditEvents, logEntries, logs } from "@/db/schema";
 import { addDays } from "@/lib/engine/calendar-date";
 import { localDateOf } from "@/lib/engine/local-date";
+import type * as EvaluatePosition from "@/lib/server/promotions/evaluate-position";
 import { loadRungSessions } from "@/lib/server/promotions/load-rung-sessions";
 import { bearerFor, createMember, createTeam } from "../support/factories";
 import { call } from "../support/http";
@@ -16,12 +17,19 @@ vi.mock("@/lib/server/promotions/evaluate-after-log", () => ({
     evaluated.push(input);
     return [];
   },
-  // Creating a log reads the positions' contexts itself (in the same trip as its inserts).
-  evaluateLoaded: async (_tx: unknown, _actor: unknown, input: { logId: string; contexts: { position: { id: string } }[] }) => {
-    evaluated.push({ logId: input.logId, positionIds: input.contexts.map((c) => c.position.id) });
-    return { verdicts: [], figures: () => [] };
-  },
 }));
+// Creating a log judges its positions from the read that went out with its locks.
+const judgedOnCreate = vi.hoisted(() => [] as string[]);
+vi.mock("@/lib/server/promotions/evaluate-position", async (importOriginal) => {
+  const original = await importOriginal<typeof EvaluatePosition>();
+  return {
+    ...original,
+    evaluateWithoutActing: (...args: Parameters<typeof original.evaluateWithoutActing>) => {
+      judgedOnCreate.push(args[1].position.id);
+      return original.evaluateWithoutActing(...args);
+    },
+  };
+});
 
 async function positionIdOf(athleteId: string, ladderId: string): Promise<string> {
   const [row] = await db
@@ -51,7 +59,8 @@ describe("editing and deleting logs", () => {
   it("passes only the positions whose current rung was logged to the evaluation", async () => {
     const { teamId, me, token, rung, today } = await setup();
     const easier = await starterRung(teamId, "freestanding-handstand", "wall-walk-up");
-    const res = await postLogAs(token, {
+    judgedOnCreate.length = 0;
+    await postLogAs(token, {
       performedOn: today,
       entries: [
         { rungId: easier.rungId, sets: [{ value: 3 }], pain: false },
@@ -59,14 +68,15 @@ describe("editing and deleting logs", () => {
         { rungId: rung.rungId, sets: [{ value: 41 }], pain: false },
       ],
     });
-    const call_ = evaluated.find((e) => e.logId === res.data.id);
     // The warm-up rung and the current rung share one ladder: one position, evaluated once.
-    expect(call_?.positionIds).toEqual([await positionIdOf(me.actor.athleteId!, rung.ladderId)]);
+    expect(judgedOnCreate).toEqual([await positionIdOf(me.actor.athleteId!, rung.ladderId)]);
   });
 
   it("changes sets, pain, note and session figures within 7 days, audited with before and after", async () => {
     const { token, rung, today } = await setup();
+    judgedOnCreate.length = 0;
     const log = await logOn(token, rung.rungId, addDays(today, -7));
+    expect(judgedOnCreate).toHaveLength(1);
     const res = await call(patchLog, {
       method: "PATCH",
       token,
@@ -75,8 +85,8 @@ describe("editing and deleting logs", () => {
     });
     expect(res.status).toBe(200);
     expect(res.data).toMatchObject({ durationMinutes: 50, sessionRpe: 6, entries: [{ bestValue: 31, pain: true, note: "left wrist" }] });
-    // Evaluated once on creation and once more after the edit, each time for the one position.
-    expect(evaluated.filter((e) => e.logId === log.id).map((e) => e.positionIds.length)).toEqual([1, 1]);
+    // Judged once on creation (above) and evaluated once more after the edit, for the one position.
+    expect(evaluated.filter((e) => e.logId === log.id).map((e) => e.positionIds.length)).toEqual([1]);
     const [audit] = await db.select().from(auditEvents).where(and(eq(auditEvents.subjectId, log.id), eq(auditEvents.action, "log.updated")));
     const data = audit!.data as { before: { durationMinutes: unknown; entries: { sets: unknown }[] }; after: { durationMinutes: unknown } };
     expect(data.before.durationMinutes).toBeNull();

@@ -8,17 +8,20 @@ import { logEntries, logs } from "@/db/schema";
 import { sessionBest } from "@/lib/engine/session-assessment";
 import type { Actor } from "@/lib/server/actor";
 import { withIdempotency } from "@/lib/server/http/idempotency";
+import { contextWithEntries } from "@/lib/server/promotions/context-with-entries";
 import { evaluateLoaded } from "@/lib/server/promotions/evaluate-after-log";
-import { loadPositionContext } from "@/lib/server/promotions/load-position-context";
+import { evaluateWithoutActing } from "@/lib/server/promotions/evaluate-position";
+import { loadLoggedContexts, loadPositionContext, type PositionContext } from "@/lib/server/promotions/load-position-context";
 import type { CreateLog, LogWithVerdicts } from "@/lib/validation/logs";
 import { checkSets } from "./check-sets";
 import { assertLoggableDate } from "./log-dates";
 import { logAthleteOf } from "./log-athlete";
-import { toLogDto } from "./log-dto";
+import { toLogDto, type EntryRow, type LogRow } from "./log-dto";
 import { currentPositions, lockPlacedRungs, placedOrThrow, type LogRung } from "./log-rungs";
 
 export const CREATE_LOG_SCOPE = "POST /api/v1/logs";
 
+/** The log's created_at is the instant its verdicts are for (see writeLog), so no RETURNING is needed. */
 const insertLog = preparedOnce((database: Db) =>
   database
     .insert(logs)
@@ -30,21 +33,22 @@ const insertLog = preparedOnce((database: Db) =>
       durationMinutes: sql.placeholder("durationMinutes"),
       sessionRpe: sql.placeholder("sessionRpe"),
       enteredById: sql.placeholder("enteredById"),
+      createdAt: sql.placeholder("createdAt"),
     })
-    .returning()
     .prepare("insert_log"),
 );
 
 /**
- * One statement per number of entries (a log has a few), each prepared once. Rows written by one
- * statement share now(); each entry gets a microsecond more than the one before, so lists ordered
- * by `created_at` keep the order the entries were posted in.
+ * One statement per number of entries (a log has a few), each prepared once. Each entry gets a
+ * microsecond more than the one before, so lists ordered by `created_at` keep the order the
+ * entries were posted in.
  */
 const insertEntries = preparedVariants((database: Db, count: number) =>
   database
     .insert(logEntries)
     .values(
       Array.from({ length: count }, (_, i) => ({
+        id: sql.placeholder(`id${i}`),
         teamId: sql.placeholder("teamId"),
         logId: sql.placeholder("logId"),
         athleteId: sql.placeholder("athleteId"),
@@ -55,48 +59,68 @@ const insertEntries = preparedVariants((database: Db, count: number) =>
         bestValue: sql.placeholder(`bestValue${i}`),
         pain: sql.placeholder(`pain${i}`),
         note: sql.placeholder(`note${i}`),
-        createdAt: sql<Date>`now() + make_interval(secs => ${sql.raw(String(i))} / 1000000.0)`,
+        createdAt: sql<Date>`${sql.placeholder("createdAt")}::timestamptz + make_interval(secs => ${sql.raw(String(i))} / 1000000.0)`,
       })),
     )
-    .returning()
     .prepare(`insert_log_entries_${count}`),
 );
 
 /**
  * POST /api/v1/logs: records one post of training at most once per Idempotency-Key. Entries are
- * stored as posted; sessions are merged per (athlete, rung, date) when read.
+ * stored as posted; sessions are merged per (athlete, rung, date) when read. The positions the log
+ * names are locked, and those it can move read, in the key's first trip.
  */
 export function createLog(actor: Actor, key: string, input: CreateLog): Promise<Response> {
   const athleteId = logAthleteOf(actor, input.athleteId);
   const rungIds = input.entries.map((e) => e.rungId);
+  const asOf = new Date();
   return withIdempotency(
     { actor, scope: CREATE_LOG_SCOPE, key, body: input, status: 201 },
     {
-      read: (tx, key) => lockPlacedRungs(tx, actor.teamId, athleteId, rungIds, key),
-      write: (tx, placed) => writeLog(tx, actor, { ...input, athleteId }, placed),
+      read: (tx, key) =>
+        Promise.all([
+          lockPlacedRungs(tx, actor.teamId, athleteId, rungIds, key),
+          loadLoggedContexts(tx, { teamId: actor.teamId, athleteId, rungIds, asOf, key }),
+        ]),
+      write: (tx, [placed, contexts]) => writeLog(tx, actor, { ...input, athleteId }, { placed, contexts, asOf }),
     },
   );
 }
 
 /**
  * Validates against the team's rungs and the athlete's positions (locked by the read that went out
- * with the key's claim, so the verdicts that follow are computed under the lock), then writes the
- * log and its entries and reads the positions' contexts in one trip, and evaluates. The figures
- * updates go out last, with the stored answer.
+ * with the key's claim, so the verdicts are computed under the lock), then judges each position the
+ * log counts toward from the context read with the lock plus the new entries. When no verdict has
+ * anything to write (the usual log), the inserts go out with the figures, the stored answer and
+ * COMMIT in one trip. A verdict that promotes or proposes takes the longer way: the inserts and a
+ * fresh read of the contexts, then the moves (evaluateLoaded), then the figures.
  */
 async function writeLog(
   tx: Tx,
   actor: Actor,
   input: CreateLog & { athleteId: string },
-  placed: Map<string, LogRung>,
+  read: { placed: Map<string, LogRung>; contexts: Map<string, PositionContext>; asOf: Date },
 ): Promise<{ value: LogWithVerdicts; last: () => Promise<unknown>[] }> {
   assertLoggableDate(input.performedOn, actor.timeZone);
   const { athleteId } = input;
-  const rungList = await placedOrThrow(tx, actor.teamId, athleteId, input.entries.map((e) => e.rungId), placed);
-  const prepared = input.entries.map((entry, i) => {
+  const { asOf } = read;
+  const rungList = await placedOrThrow(tx, actor.teamId, athleteId, input.entries.map((e) => e.rungId), read.placed);
+  // The ids are made here, and created_at is `asOf`, so the answer is known before the rows are written.
+  const log: LogRow = {
+    id: randomUUID(),
+    athleteId,
+    performedOn: input.performedOn,
+    durationMinutes: input.durationMinutes ?? null,
+    sessionRpe: input.sessionRpe ?? null,
+    enteredById: actor.userId,
+    createdAt: asOf,
+  };
+  const entries: EntryRow[] = input.entries.map((entry, i) => {
     const rung = rungList[i]!;
     const sets = checkSets(rung.measure, entry.sets, `entries.${i}.sets`);
     return {
+      id: randomUUID(),
+      logId: log.id,
       ladderId: rung.ladderId,
       rungId: rung.rungId,
       sets,
@@ -105,31 +129,36 @@ async function writeLog(
       note: entry.note || null,
     };
   });
-
-  // The id is made here so the entries can go out in the same trip as their log.
-  const logId = randomUUID();
-  const asOf = new Date();
-  const [[log], entries, ...contexts] = await oneTrip(tx, () => [
-    insertLog(tx).execute({
-      id: logId,
-      teamId: actor.teamId,
-      athleteId,
-      performedOn: input.performedOn,
-      durationMinutes: input.durationMinutes ?? null,
-      sessionRpe: input.sessionRpe ?? null,
-      enteredById: actor.userId,
-    }),
-    insertEntries(tx, prepared.length).execute(
+  const dto = toLogDto(log, entries);
+  const inserts = () => [
+    insertLog(tx).execute({ ...log, teamId: actor.teamId }),
+    insertEntries(tx, entries.length).execute(
       Object.fromEntries([
         ["teamId", actor.teamId],
-        ["logId", logId],
+        ["logId", log.id],
         ["athleteId", athleteId],
         ["performedOn", input.performedOn],
-        ...prepared.flatMap((e, i) => Object.entries(e).map(([field, value]) => [`${field}${i}`, value])),
+        ["createdAt", asOf],
+        ...entries.flatMap(({ logId: _sameForAll, ...e }, i) => Object.entries(e).map(([field, value]) => [`${field}${i}`, value])),
       ]),
     ),
-    ...currentPositions(rungList).map((positionId) => loadPositionContext(tx, { positionId, teamId: actor.teamId, asOf })),
+  ] as const;
+
+  const positionIds = currentPositions(rungList);
+  const quiet = positionIds.map((positionId) => {
+    const ctx = read.contexts.get(positionId);
+    if (!ctx) return null;
+    const added = entries.filter((e) => e.rungId === ctx.rung.id).map((e) => ({ date: input.performedOn, sets: e.sets, pain: e.pain }));
+    return evaluateWithoutActing(tx, contextWithEntries(ctx, added, asOf), asOf);
+  });
+  if (quiet.every((evaluation) => evaluation !== null)) {
+    return { value: { ...dto, verdicts: quiet.map((e) => e.verdict) }, last: () => [...inserts(), ...quiet.flatMap((e) => e.figures())] };
+  }
+
+  const [, , ...contexts] = await oneTrip(tx, () => [
+    ...inserts(),
+    ...positionIds.map((positionId) => loadPositionContext(tx, { positionId, teamId: actor.teamId, asOf })),
   ] as const);
-  const { verdicts, figures } = await evaluateLoaded(tx, actor, { contexts, logId }, asOf);
-  return { value: { ...toLogDto(log!, entries), verdicts }, last: figures };
+  const { verdicts, figures } = await evaluateLoaded(tx, actor, { contexts, logId: log.id }, asOf);
+  return { value: { ...dto, verdicts }, last: figures };
 }

@@ -89,11 +89,34 @@ export async function evaluateContext(tx: Tx, ctx: PositionContext, input: Omit<
   return { verdict, figures: () => [writeFigures(tx, moved, fresh, movedOutcome)] };
 }
 
-async function act(tx: Tx, ctx: PositionContext, judged: Judgement, input: Omit<EvaluatePositionInput, "positionId">): Promise<Outcome> {
+/**
+ * Evaluates a context the caller read under the position's lock when acting on its verdict writes
+ * nothing (the skill is achieved, a proposal waits, or the verdict moves nothing): the verdict and
+ * the figures update, with no statement of its own before them. Null when acting would write (a
+ * standard met, a step down due); evaluateContext does that.
+ */
+export function evaluateWithoutActing(tx: Tx, ctx: PositionContext, asOf: Date): Evaluation | null {
+  const judged = judgePosition(ctx, asOf);
+  const outcome = quietOutcome(ctx, judged);
+  if (!outcome) return null;
+  const verdict = toVerdictDto({ ladderId: ctx.ladder.id, rungId: ctx.rung.id }, judged.verdict, judged.explanation, outcome);
+  return { verdict, figures: () => [writeFigures(tx, ctx, judged, outcome)] };
+}
+
+/** The outcome of a verdict that moves and proposes nothing; null when acting on it may write. */
+function quietOutcome(ctx: PositionContext, judged: Judgement): Outcome | null {
   const none: Outcome = { promotedTo: null, pendingPromotionId: null, pendingDirection: null, achieved: ctx.position.achievedAt !== null };
   if (ctx.position.achievedAt) return none;
   // Read under the position lock: a proposal waits, so nothing new is proposed or applied.
   if (ctx.pending) return { ...none, pendingPromotionId: ctx.pending.id, pendingDirection: ctx.pending.direction };
+  const { status } = judged.verdict;
+  return status === "met" || (status === "step_down" && ctx.previousRung) ? null : none;
+}
+
+async function act(tx: Tx, ctx: PositionContext, judged: Judgement, input: Omit<EvaluatePositionInput, "positionId">): Promise<Outcome> {
+  const quiet = quietOutcome(ctx, judged);
+  if (quiet) return quiet;
+  const none: Outcome = { promotedTo: null, pendingPromotionId: null, pendingDirection: null, achieved: false };
 
   const { verdict } = judged;
   const effectiveOn = verdict.lastSessionDate ?? judged.today;
@@ -134,7 +157,7 @@ async function act(tx: Tx, ctx: PositionContext, judged: Judgement, input: Omit<
     if (await declinedWithoutNewEvidence(tx, ctx, "down", effectiveOn)) return none;
     return { ...none, pendingPromotionId: await propose(tx, ctx, draft("down", ctx.previousRung.id)), pendingDirection: "down" };
   }
-  return none;
+  throw new Error(`No action for a ${verdict.status} verdict that quietOutcome left to act.`);
 }
 
 async function propose(tx: Tx, ctx: PositionContext, draft: PromotionDraft): Promise<string> {

@@ -6,6 +6,7 @@ import { athletePositions, athletes, ladders, rungs, standards, teams } from "@/
 import { addDays, MAX_LOOKBACK_SESSIONS, type Measure, type PrerequisiteState, type PromotionMode, type Session, type Standard } from "@/lib/engine";
 import { standardOf } from "./standard-of";
 import { standardColumns } from "@/lib/server/ladders/standard-columns";
+import { keyOpen, type KeyPlaceholders } from "@/lib/server/http/idempotency";
 
 export interface RungRef {
   id: string;
@@ -52,10 +53,15 @@ export interface PositionContext {
  * How many dates can lie after a team's today yet not after the horizon (the UTC date of the
  * instant plus one): local dates run from the UTC date minus one to plus one, so at most two.
  */
-const PAST_TODAY = 2;
+export const PAST_TODAY = 2;
 
 /** The dates read for a verdict: every window of the standard, plus the dates past today. */
-const RECENT_DATES = MAX_LOOKBACK_SESSIONS + PAST_TODAY;
+export const RECENT_DATES = MAX_LOOKBACK_SESSIONS + PAST_TODAY;
+
+/** The last date whose entries a verdict as of `asOf` may read: the UTC date of the instant plus one. */
+export function horizonOf(asOf: Date): string {
+  return addDays(asOf.toISOString().slice(0, 10), 1);
+}
 
 /** The nearest live rung above the position's rung (archived rungs sit at ≤ 0). */
 const nextRung = sql<RungRef | null>`(
@@ -130,13 +136,24 @@ const pendingProposal = sql<PositionContext["pending"]>`(
   select json_build_object('id', p.id, 'direction', p.direction) from promotions p
   where p.position_id = ${athletePositions.id} and p.status = 'pending' limit 1)`;
 
-type Scope = "team" | "system";
+/**
+ * Which positions a statement reads: one of the team when a person asks, one of any team for the
+ * system (daily job, seed), or, for a log's first trip, the athlete's positions standing on one of
+ * the logged rungs, read only while the request may write under its Idempotency-Key (see keyOpen).
+ */
+type Scope = "team" | "system" | "logged";
 
-/** The position, of the team when a person asks; the system (daily job, seed) reads any. */
 const positionScope = (scope: Scope) =>
-  and(eq(athletePositions.id, sql.placeholder("positionId")), scope === "team" ? eq(athletePositions.teamId, sql.placeholder("teamId")) : undefined);
+  scope === "logged"
+    ? and(
+        eq(athletePositions.teamId, sql.placeholder("teamId")),
+        eq(athletePositions.athleteId, sql.placeholder("athleteId")),
+        sql`${athletePositions.rungId} = any(${sql.placeholder("rungIds")}::uuid[])`,
+        keyOpen,
+      )
+    : and(eq(athletePositions.id, sql.placeholder("positionId")), scope === "team" ? eq(athletePositions.teamId, sql.placeholder("teamId")) : undefined);
 
-const lockPosition = preparedVariants((database: Db, scope: Scope) =>
+const lockPosition = preparedVariants((database: Db, scope: Exclude<Scope, "logged">) =>
   database.select({ id: athletePositions.id }).from(athletePositions).where(positionScope(scope)).for("update").prepare(`lock_position_${scope}`),
 );
 
@@ -205,10 +222,33 @@ export async function loadPositionContext(q: Queryable, options: ContextOptions)
     const [locked] = await lockPosition(q, scope).execute(values);
     if (!locked) return null;
   }
-  const utcDate = (options.asOf ?? new Date()).toISOString().slice(0, 10);
-  const [row] = await contextOf(q, `${scope}:${options.history ?? "recent"}`).execute({ ...values, horizon: addDays(utcDate, 1) });
-  if (!row) return null;
+  const [row] = await contextOf(q, `${scope}:${options.history ?? "recent"}`).execute({ ...values, horizon: horizonOf(options.asOf ?? new Date()) });
+  return row ? contextOfRow(row) : null;
+}
 
+/**
+ * The contexts (for a verdict as of `asOf`) of an athlete's positions whose current rung is one of
+ * `rungIds`, by position id, in one statement that submits synchronously. A log sends it in its
+ * first trip right after the statement that locks those positions, so it reads them as the lock
+ * holds them; while another request holds the key, or for a replay, it reads nothing.
+ */
+export async function loadLoggedContexts(
+  q: Queryable,
+  input: { teamId: string; athleteId: string; rungIds: readonly string[]; asOf: Date; key: KeyPlaceholders },
+): Promise<Map<string, PositionContext>> {
+  const rows = await contextOf(q, "logged:recent").execute({
+    teamId: input.teamId,
+    athleteId: input.athleteId,
+    rungIds: [...new Set(input.rungIds)],
+    horizon: horizonOf(input.asOf),
+    ...input.key,
+  });
+  return new Map(rows.map((row) => [row.position.id, contextOfRow(row)]));
+}
+
+type ContextRow = Awaited<ReturnType<ReturnType<typeof contextOf>["execute"]>>[number];
+
+function contextOfRow(row: ContextRow): PositionContext {
   const hasStandard = row.standard !== null && row.standard.sets !== null;
   return {
     position: row.position,

@@ -1,0 +1,33 @@
+import "server-only";
+import type { Session } from "@/lib/engine";
+import { horizonOf, PAST_TODAY, RECENT_DATES, type PositionContext } from "./load-position-context";
+
+/**
+ * A recent-history context read before some entries on its rung were written, as the same read
+ * would return it after: the entries and pain dates loadPositionContext selects, by the same rules
+ * (entries from the position's date on; the window of the last RECENT_DATES dates up to the
+ * horizon; the last few pain dates up to it). Lets a log judge its positions from the read that
+ * went out with its locks, instead of reading them again after its inserts.
+ *
+ * The added entries are the newest (written last), so they follow the read ones of the same date;
+ * within a date the order of sets changes no verdict (counts and best values).
+ */
+export function contextWithEntries(ctx: PositionContext, added: readonly Session[], asOf: Date): PositionContext {
+  const kept = added.filter((entry) => entry.date >= ctx.position.since);
+  if (kept.length === 0) return ctx;
+  const horizon = horizonOf(asOf);
+
+  // A stable sort keeps the read order, and puts the added entries after those of their date.
+  const entries = [...ctx.entries, ...kept].sort((a, b) => (a.date < b.date ? -1 : a.date > b.date ? 1 : 0));
+  const windowDates = [...new Set(entries.map((e) => e.date).filter((date) => date <= horizon))].sort().reverse().slice(0, RECENT_DATES);
+  // The window's first date, never before the position's (PostgreSQL's greatest() skips a null).
+  const oldest = windowDates.at(-1);
+  const from = oldest !== undefined && oldest > ctx.position.since ? oldest : ctx.position.since;
+
+  const painDates = [...new Set([...ctx.painDates, ...kept.filter((e) => e.pain && e.date <= horizon).map((e) => e.date)])]
+    .sort()
+    .reverse()
+    .slice(0, PAST_TODAY + 1);
+
+  return { ...ctx, entries: entries.filter((e) => e.date >= from), painDates };
+}
