@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { zEmail, zName, zPassword, zTimeZone } from "./common";
+import { noNul, NUL_MESSAGE, zEmail, zName, zPassword, zTimeZone } from "./common";
 
 export const ZSignUp = z.strictObject({
   email: zEmail,
@@ -26,7 +26,7 @@ export const ZPasswordResetRequest = z.strictObject({ email: zEmail });
 export const ZPasswordReset = z.strictObject({ password: zPassword });
 
 export const ZCreateToken = z.strictObject({
-  name: z.string().trim().min(1, "Name the token after what uses it.").max(80),
+  name: z.string().trim().min(1, "Name the token after what uses it.").max(80).refine(noNul, NUL_MESSAGE),
 });
 export type CreateTokenInput = z.infer<typeof ZCreateToken>;
 

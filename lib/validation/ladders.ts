@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { MAX_LOOKBACK_SESSIONS, MEASURES, PROMOTION_MODES, RUNG_TAGS, type Measure } from "@/lib/engine";
-import { zDate, zId, zName, zPageQuery } from "./common";
+import { noNul, NUL_MESSAGE, zDate, zId, zName, zPageQuery } from "./common";
 
 /** Input schemas for ladders, rungs, standards and placements (shared by forms and handlers). */
 
@@ -84,11 +84,8 @@ export function standardIssues(measure: Measure, standard: Pick<StandardInput, "
   return [];
 }
 
-/** PostgreSQL text cannot hold NUL characters; refuse them here rather than fail in the database. */
-export const noNul = (value: string) => !value.includes("\u0000");
-const NUL_MESSAGE = "Contains a character that cannot be stored.";
 export const zText = (max: number) => z.string().trim().max(max, `Keep it under ${max} characters.`).refine(noNul, NUL_MESSAGE);
-export const zLabel = zName.refine(noNul, NUL_MESSAGE);
+export const zLabel = zName;
 export const zTargetSkill = z.string().trim().min(1, "Name the target skill.").max(100, "Keep it under 100 characters.").refine(noNul, NUL_MESSAGE);
 
 const zOptionalText = (max: number) => zText(max).nullable().optional();

@@ -32,4 +32,9 @@ describe("failed mail jobs", () => {
     expect(rows[0]?.state).toBe("retry");
     expect((await listFailedJobs(owner)).map((j) => j.id)).not.toContain(jobId);
   });
+
+  it("answers a job id that is not a UUID (a tampered form) with not found, not a database error", async () => {
+    const { owner } = await createTeam();
+    for (const jobId of ["not-a-uuid", "", "\u0000"]) await expect(retryFailedJob(owner, jobId)).rejects.toBeInstanceOf(NotFound);
+  });
 });
