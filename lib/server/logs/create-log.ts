@@ -102,20 +102,45 @@ async function writeLog(
   read: { placed: Map<string, LogRung>; contexts: Map<string, PositionContext>; asOf: Date },
 ): Promise<{ value: LogWithVerdicts; last: () => Promise<unknown>[] }> {
   assertLoggableDate(input.performedOn, actor.timeZone);
-  const { athleteId } = input;
   const { asOf } = read;
-  const rungList = await placedOrThrow(tx, actor.teamId, athleteId, input.entries.map((e) => e.rungId), read.placed);
-  // The ids are made here, and created_at is `asOf`, so the answer is known before the rows are written.
+  const rungList = await placedOrThrow(tx, actor.teamId, input.athleteId, input.entries.map((e) => e.rungId), read.placed);
+  const { log, entries } = logRows(actor, input, rungList, asOf);
+  const dto = toLogDto(log, entries);
+  const positionIds = currentPositions(rungList);
+
+  const quiet = positionIds.map((positionId) => {
+    const ctx = read.contexts.get(positionId);
+    if (!ctx) return null;
+    const added = entries.filter((e) => e.rungId === ctx.rung.id).map((e) => ({ date: log.performedOn, sets: e.sets, pain: e.pain }));
+    return evaluateWithoutActing(tx, contextWithEntries(ctx, added, asOf), asOf);
+  });
+  if (quiet.every((evaluation) => evaluation !== null)) {
+    return { value: { ...dto, verdicts: quiet.map((e) => e.verdict) }, last: () => [...insertRows(tx, actor.teamId, log, entries), ...quiet.flatMap((e) => e.figures())] };
+  }
+
+  const [, , ...contexts] = await oneTrip(tx, () => [
+    ...insertRows(tx, actor.teamId, log, entries),
+    ...positionIds.map((positionId) => loadPositionContext(tx, { positionId, teamId: actor.teamId, asOf })),
+  ] as const);
+  const { verdicts, figures } = await evaluateLoaded(tx, actor, { contexts, logId: log.id }, asOf);
+  return { value: { ...dto, verdicts }, last: figures };
+}
+
+/**
+ * The log's and its entries' rows, sets checked against each rung's measure. The ids are made here
+ * and created_at is `asOf`, so the answer is known before the rows are written.
+ */
+function logRows(actor: Actor, input: CreateLog & { athleteId: string }, rungList: LogRung[], asOf: Date): { log: LogRow; entries: EntryRow[] } {
   const log: LogRow = {
     id: randomUUID(),
-    athleteId,
+    athleteId: input.athleteId,
     performedOn: input.performedOn,
     durationMinutes: input.durationMinutes ?? null,
     sessionRpe: input.sessionRpe ?? null,
     enteredById: actor.userId,
     createdAt: asOf,
   };
-  const entries: EntryRow[] = input.entries.map((entry, i) => {
+  const entries = input.entries.map((entry, i): EntryRow => {
     const rung = rungList[i]!;
     const sets = checkSets(rung.measure, entry.sets, `entries.${i}.sets`);
     return {
@@ -129,36 +154,22 @@ async function writeLog(
       note: entry.note || null,
     };
   });
-  const dto = toLogDto(log, entries);
-  const inserts = () => [
-    insertLog(tx).execute({ ...log, teamId: actor.teamId }),
+  return { log, entries };
+}
+
+/** Sends the log's and its entries' inserts (submitting synchronously, for a oneTrip). */
+function insertRows(tx: Tx, teamId: string, log: LogRow, entries: readonly EntryRow[]) {
+  return [
+    insertLog(tx).execute({ ...log, teamId }),
     insertEntries(tx, entries.length).execute(
       Object.fromEntries([
-        ["teamId", actor.teamId],
+        ["teamId", teamId],
         ["logId", log.id],
-        ["athleteId", athleteId],
-        ["performedOn", input.performedOn],
-        ["createdAt", asOf],
+        ["athleteId", log.athleteId],
+        ["performedOn", log.performedOn],
+        ["createdAt", log.createdAt],
         ...entries.flatMap(({ logId: _sameForAll, ...e }, i) => Object.entries(e).map(([field, value]) => [`${field}${i}`, value])),
       ]),
     ),
   ] as const;
-
-  const positionIds = currentPositions(rungList);
-  const quiet = positionIds.map((positionId) => {
-    const ctx = read.contexts.get(positionId);
-    if (!ctx) return null;
-    const added = entries.filter((e) => e.rungId === ctx.rung.id).map((e) => ({ date: input.performedOn, sets: e.sets, pain: e.pain }));
-    return evaluateWithoutActing(tx, contextWithEntries(ctx, added, asOf), asOf);
-  });
-  if (quiet.every((evaluation) => evaluation !== null)) {
-    return { value: { ...dto, verdicts: quiet.map((e) => e.verdict) }, last: () => [...inserts(), ...quiet.flatMap((e) => e.figures())] };
-  }
-
-  const [, , ...contexts] = await oneTrip(tx, () => [
-    ...inserts(),
-    ...positionIds.map((positionId) => loadPositionContext(tx, { positionId, teamId: actor.teamId, asOf })),
-  ] as const);
-  const { verdicts, figures } = await evaluateLoaded(tx, actor, { contexts, logId: log.id }, asOf);
-  return { value: { ...dto, verdicts }, last: figures };
 }
