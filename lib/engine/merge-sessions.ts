@@ -1,6 +1,8 @@
 /**
  * All entries of one rung on one date form one session (design.md §3). Logs arrive set by set, so
- * several entries may share a date; merging keeps every set and any pain flag.
+ * several entries may share a date; merging keeps every set and any pain flag. The order of a
+ * session's sets never changes its assessment (sets are counted, and the best ones taken): callers
+ * may merge entries of a date in any order.
  */
 import type { Session } from "./types";
 

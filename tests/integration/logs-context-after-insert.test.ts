@@ -103,5 +103,19 @@ describe("POST /api/v1/logs verdicts", () => {
     // The last good session met the standard (two of the last three good, pain-free): promoted once.
     const [position] = await db.select().from(athletePositions).where(eq(athletePositions.athleteId, athleteId));
     expect(position!.rungId).toBe(ladder.rungIds[1]);
+
+    // A warm-up on the rung below in the same post counts for nothing on the new rung.
+    const [easier, current] = [ladder.rungIds[0]!, ladder.rungIds[1]!];
+    const warmUp = await postLogAs(token, {
+      performedOn: daysAgo(3),
+      entries: [
+        { rungId: easier, sets: GOOD_SETS, pain: false },
+        { rungId: current, sets: WEAK_SETS, pain: false },
+      ],
+    });
+    expect(warmUp.status).toBe(201);
+    const [verdict] = warmUp.data.verdicts as VerdictDto[];
+    expect(verdict!.rungId).toBe(current);
+    expect(judged(verdict!)).toEqual(judged(await getPositionVerdict(owner, { athleteId, ladderId: ladder.ladderId })));
   });
 });

@@ -5,6 +5,7 @@ import { db } from "@/db/client";
 import { athletePositions, auditEvents, logEntries, logs } from "@/db/schema";
 import { addDays } from "@/lib/engine/calendar-date";
 import { localDateOf } from "@/lib/engine/local-date";
+import type * as EvaluateAfterLog from "@/lib/server/promotions/evaluate-after-log";
 import type * as EvaluatePosition from "@/lib/server/promotions/evaluate-position";
 import { loadRungSessions } from "@/lib/server/promotions/load-rung-sessions";
 import { bearerFor, createMember, createTeam } from "../support/factories";
@@ -12,7 +13,9 @@ import { call } from "../support/http";
 import { placeOn, postLogAs, starterRung } from "../support/logging-factories";
 
 const evaluated = vi.hoisted(() => [] as { logId: string; positionIds: string[] }[]);
-vi.mock("@/lib/server/promotions/evaluate-after-log", () => ({
+vi.mock("@/lib/server/promotions/evaluate-after-log", async (importOriginal) => ({
+  // The real evaluateLoaded stays, for a log whose verdict may promote.
+  ...(await importOriginal<typeof EvaluateAfterLog>()),
   evaluateAfterLog: async (_tx: unknown, _actor: unknown, input: { logId: string; positionIds: string[] }) => {
     evaluated.push(input);
     return [];
@@ -60,7 +63,7 @@ describe("editing and deleting logs", () => {
     const { teamId, me, token, rung, today } = await setup();
     const easier = await starterRung(teamId, "freestanding-handstand", "wall-walk-up");
     judgedOnCreate.length = 0;
-    await postLogAs(token, {
+    const res = await postLogAs(token, {
       performedOn: today,
       entries: [
         { rungId: easier.rungId, sets: [{ value: 3 }], pain: false },
@@ -68,6 +71,7 @@ describe("editing and deleting logs", () => {
         { rungId: rung.rungId, sets: [{ value: 41 }], pain: false },
       ],
     });
+    expect(res.status).toBe(201);
     // The warm-up rung and the current rung share one ladder: one position, evaluated once.
     expect(judgedOnCreate).toEqual([await positionIdOf(me.actor.athleteId!, rung.ladderId)]);
   });

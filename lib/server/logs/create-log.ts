@@ -77,6 +77,8 @@ export function createLog(actor: Actor, key: string, input: CreateLog): Promise<
   return withIdempotency(
     { actor, scope: CREATE_LOG_SCOPE, key, body: input, status: 201 },
     {
+      // In this order: the context read goes out after the statement that locks its positions, so
+      // it reads them as the lock holds them.
       read: (tx, key) =>
         Promise.all([
           lockPlacedRungs(tx, actor.teamId, athleteId, rungIds, key),
@@ -92,8 +94,9 @@ export function createLog(actor: Actor, key: string, input: CreateLog): Promise<
  * with the key's claim, so the verdicts are computed under the lock), then judges each position the
  * log counts toward from the context read with the lock plus the new entries. When no verdict has
  * anything to write (the usual log), the inserts go out with the figures, the stored answer and
- * COMMIT in one trip. A verdict that promotes or proposes takes the longer way: the inserts and a
- * fresh read of the contexts, then the moves (evaluateLoaded), then the figures.
+ * COMMIT in one trip. A verdict that may promote or propose takes the longer way (rare: a standard
+ * met, a step down due): the inserts and a fresh read of the contexts, then the moves
+ * (evaluateLoaded), then the figures; the judgement made from the first read is dropped.
  */
 async function writeLog(
   tx: Tx,
@@ -101,8 +104,8 @@ async function writeLog(
   input: CreateLog & { athleteId: string },
   read: { placed: Map<string, LogRung>; contexts: Map<string, PositionContext>; asOf: Date },
 ): Promise<{ value: LogWithVerdicts; last: () => Promise<unknown>[] }> {
-  assertLoggableDate(input.performedOn, actor.timeZone);
   const { asOf } = read;
+  assertLoggableDate(input.performedOn, actor.timeZone, asOf);
   const rungList = await placedOrThrow(tx, actor.teamId, input.athleteId, input.entries.map((e) => e.rungId), read.placed);
   const { log, entries } = logRows(actor, input, rungList, asOf);
   const dto = toLogDto(log, entries);
@@ -118,8 +121,8 @@ async function writeLog(
     return { value: { ...dto, verdicts: quiet.map((e) => e.verdict) }, last: () => [...insertRows(tx, actor.teamId, log, entries), ...quiet.flatMap((e) => e.figures())] };
   }
 
-  const [, , ...contexts] = await oneTrip(tx, () => [
-    ...insertRows(tx, actor.teamId, log, entries),
+  const [, ...contexts] = await oneTrip(tx, () => [
+    Promise.all(insertRows(tx, actor.teamId, log, entries)),
     ...positionIds.map((positionId) => loadPositionContext(tx, { positionId, teamId: actor.teamId, asOf })),
   ] as const);
   const { verdicts, figures } = await evaluateLoaded(tx, actor, { contexts, logId: log.id }, asOf);
@@ -160,7 +163,16 @@ function logRows(actor: Actor, input: CreateLog & { athleteId: string }, rungLis
 /** Sends the log's and its entries' inserts (submitting synchronously, for a oneTrip). */
 function insertRows(tx: Tx, teamId: string, log: LogRow, entries: readonly EntryRow[]) {
   return [
-    insertLog(tx).execute({ ...log, teamId }),
+    insertLog(tx).execute({
+      id: log.id,
+      teamId,
+      athleteId: log.athleteId,
+      performedOn: log.performedOn,
+      durationMinutes: log.durationMinutes,
+      sessionRpe: log.sessionRpe,
+      enteredById: log.enteredById,
+      createdAt: log.createdAt,
+    }),
     insertEntries(tx, entries.length).execute(
       Object.fromEntries([
         ["teamId", teamId],
@@ -168,7 +180,15 @@ function insertRows(tx: Tx, teamId: string, log: LogRow, entries: readonly Entry
         ["athleteId", log.athleteId],
         ["performedOn", log.performedOn],
         ["createdAt", log.createdAt],
-        ...entries.flatMap(({ logId: _sameForAll, ...e }, i) => Object.entries(e).map(([field, value]) => [`${field}${i}`, value])),
+        ...entries.flatMap((e, i) => [
+          [`id${i}`, e.id],
+          [`ladderId${i}`, e.ladderId],
+          [`rungId${i}`, e.rungId],
+          [`sets${i}`, e.sets],
+          [`bestValue${i}`, e.bestValue],
+          [`pain${i}`, e.pain],
+          [`note${i}`, e.note],
+        ]),
       ]),
     ),
   ] as const;

@@ -9,8 +9,9 @@ import { horizonOf, PAST_TODAY, RECENT_DATES, type PositionContext } from "./loa
  * horizon; the last few pain dates up to it). Lets a log judge its positions from the read that
  * went out with its locks, instead of reading them again after its inserts.
  *
- * The added entries are the newest (written last), so they follow the read ones of the same date;
- * within a date the order of sets changes no verdict (counts and best values).
+ * The added entries go after the read ones of their date. PostgreSQL orders a date's entries by
+ * created_at, which a log takes from the app's clock, so a concurrent log can sit on either side;
+ * that changes no verdict, because a session's sets are judged regardless of order (mergeSessions).
  */
 export function contextWithEntries(ctx: PositionContext, added: readonly Session[], asOf: Date): PositionContext {
   const kept = added.filter((entry) => entry.date >= ctx.position.since);
@@ -20,9 +21,8 @@ export function contextWithEntries(ctx: PositionContext, added: readonly Session
   // A stable sort keeps the read order, and puts the added entries after those of their date.
   const entries = [...ctx.entries, ...kept].sort((a, b) => (a.date < b.date ? -1 : a.date > b.date ? 1 : 0));
   const windowDates = [...new Set(entries.map((e) => e.date).filter((date) => date <= horizon))].sort().reverse().slice(0, RECENT_DATES);
-  // The window's first date, never before the position's (PostgreSQL's greatest() skips a null).
-  const oldest = windowDates.at(-1);
-  const from = oldest !== undefined && oldest > ctx.position.since ? oldest : ctx.position.since;
+  // The window's first date; with no date up to the horizon, the position's (greatest() skips a null).
+  const from = windowDates.at(-1) ?? ctx.position.since;
 
   const painDates = [...new Set([...ctx.painDates, ...kept.filter((e) => e.pain && e.date <= horizon).map((e) => e.date)])]
     .sort()

@@ -30,8 +30,8 @@ export async function evaluateAfterLog(
 }
 
 /**
- * evaluateAfterLog for contexts the caller read itself (createLog reads them in the same trip as
- * its inserts). Returns the verdicts, and the figures updates for the caller to send.
+ * evaluateAfterLog for contexts the caller read itself (createLog, when a verdict may promote or
+ * propose, reads them in the same trip as its inserts). Returns the verdicts, and the figures updates for the caller to send.
  */
 export async function evaluateLoaded(
   tx: Tx,

@@ -92,8 +92,9 @@ export async function evaluateContext(tx: Tx, ctx: PositionContext, input: Omit<
 /**
  * Evaluates a context the caller read under the position's lock when acting on its verdict writes
  * nothing (the skill is achieved, a proposal waits, or the verdict moves nothing): the verdict and
- * the figures update, with no statement of its own before them. Null when acting would write (a
- * standard met, a step down due); evaluateContext does that.
+ * the figures update, with no statement of its own before them. Null when acting may write (a
+ * standard met, a step down due; a coach's earlier decline may still hold it back): evaluateContext
+ * does that.
  */
 export function evaluateWithoutActing(tx: Tx, ctx: PositionContext, asOf: Date): Evaluation | null {
   const judged = judgePosition(ctx, asOf);
