@@ -77,7 +77,7 @@ export interface Evaluation {
  */
 export async function evaluateContext(tx: Tx, ctx: PositionContext, input: Omit<EvaluatePositionInput, "positionId">): Promise<Evaluation> {
   const judged = judgePosition(ctx, input.asOf);
-  const outcome = await act(tx, ctx, judged, input);
+  const outcome = quietOutcome(ctx, judged) ?? (await act(tx, ctx, judged, input));
   const verdict = toVerdictDto({ ladderId: ctx.ladder.id, rungId: ctx.rung.id }, judged.verdict, judged.explanation, outcome);
   if (!outcome.promotedTo) return { verdict, figures: () => [writeFigures(tx, ctx, judged, outcome)] };
 
@@ -114,9 +114,8 @@ function quietOutcome(ctx: PositionContext, judged: Judgement): Outcome | null {
   return status === "met" || (status === "step_down" && ctx.previousRung) ? null : none;
 }
 
+/** Acts on a verdict quietOutcome left to act on: the position is neither achieved nor waiting. */
 async function act(tx: Tx, ctx: PositionContext, judged: Judgement, input: Omit<EvaluatePositionInput, "positionId">): Promise<Outcome> {
-  const quiet = quietOutcome(ctx, judged);
-  if (quiet) return quiet;
   const none: Outcome = { promotedTo: null, pendingPromotionId: null, pendingDirection: null, achieved: false };
 
   const { verdict } = judged;
