@@ -32,9 +32,12 @@ test("the demo coach reviews a chosen week, filters to ready, approves from the 
   // The demo seed leaves a promotion waiting for approval on an approve-mode ladder.
   const approve = table.getByRole("button", { name: /Approve the promotion of/ }).first();
   await expect(approve).toBeEnabled();
-  const label = (await approve.getAttribute("aria-label")) ?? "";
-  const who = label.replace(/^Approve the promotion of /, "").split(" on ")[0]!;
-  await expect(table.getByRole("link", { name: who })).toBeVisible();
+  // Read together and retried: the filtered rows may still be replacing the previous ones.
+  await expect(async () => {
+    const label = (await approve.getAttribute("aria-label")) ?? "";
+    const who = label.replace(/^Approve the promotion of /, "").split(" on ")[0]!;
+    await expect(table.getByRole("link", { name: who })).toBeVisible({ timeout: 1_000 });
+  }).toPass({ timeout: 10_000 });
 
   // Keyboard: arrow keys move between cells.
   await table.getByRole("columnheader", { name: "Athlete" }).focus();
