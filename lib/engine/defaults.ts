@@ -6,9 +6,8 @@
 import type { Measure, Standard, StepDownRule } from "./types";
 
 /**
- * The most recent sessions any clause of a standard looks back over: the sessions window, the pain
- * window and the run of drops are each at most this many (the standard's limits). Readers that feed
- * the engine may stop there.
+ * The limit on each of a standard's look-backs: the sessions window, the pain window and the run of
+ * drops are each at most this many (the validation's bounds), so lookbackSessions never exceeds it.
  */
 export const MAX_LOOKBACK_SESSIONS = 20;
 

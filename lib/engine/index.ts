@@ -9,6 +9,7 @@ export { mergeSessions, sessionsInRange } from "./merge-sessions";
 export { isEachSide, setValue, setMeetsValue, setQualifies } from "./set-value";
 export { assessSession, sessionBest, type SessionAssessment } from "./session-assessment";
 export { checkStepDown, stepDownRuleOf } from "./step-down";
+export { lookbackSessions } from "./lookback";
 export { explainVerdict, explainClause, waitingText } from "./explain";
 export { describeStandard, effortCeilingText } from "./standard-text";
 export { formatValue } from "./format-value";

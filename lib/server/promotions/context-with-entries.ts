@@ -1,12 +1,12 @@
 import "server-only";
 import type { Session } from "@/lib/engine";
-import { horizonOf, PAST_TODAY, RECENT_DATES, type PositionContext } from "./load-position-context";
+import { horizonOf, PAST_TODAY, recentDatesOf, type PositionContext } from "./load-position-context";
 
 /**
  * A recent-history context read before some entries on its rung were written, as the same read
  * would return it after: the entries and pain dates loadPositionContext selects, by the same rules
- * (entries from the position's date on; the window of the last RECENT_DATES dates up to the
- * horizon; the last few pain dates up to it). Lets a log judge its positions from the read that
+ * (entries from the position's date on; the window of the last recentDatesOf(standard) dates up to
+ * the horizon; the last few pain dates up to it). Lets a log judge its positions from the read that
  * went out with its locks, instead of reading them again after its inserts.
  *
  * The added entries go after the read ones of their date. PostgreSQL orders a date's entries by
@@ -20,7 +20,7 @@ export function contextWithEntries(ctx: PositionContext, added: readonly Session
 
   // A stable sort keeps the read order, and puts the added entries after those of their date.
   const entries = [...ctx.entries, ...kept].sort((a, b) => (a.date < b.date ? -1 : a.date > b.date ? 1 : 0));
-  const windowDates = [...new Set(entries.map((e) => e.date).filter((date) => date <= horizon))].sort().reverse().slice(0, RECENT_DATES);
+  const windowDates = [...new Set(entries.map((e) => e.date).filter((date) => date <= horizon))].sort().reverse().slice(0, recentDatesOf(ctx.standard));
   // The window's first date; with no date up to the horizon, the position's (greatest() skips a null).
   const from = windowDates.at(-1) ?? ctx.position.since;
 

@@ -3,7 +3,7 @@ import { and, eq, sql } from "drizzle-orm";
 import type { Db, Queryable } from "@/db/client";
 import { preparedVariants } from "@/db/prepared";
 import { athletePositions, athletes, ladders, rungs, standards, teams } from "@/db/schema";
-import { addDays, MAX_LOOKBACK_SESSIONS, type Measure, type PrerequisiteState, type PromotionMode, type Session, type Standard } from "@/lib/engine";
+import { addDays, defaultStandard, lookbackSessions, MEASURES, type Measure, type PrerequisiteState, type PromotionMode, type Session, type Standard } from "@/lib/engine";
 import { standardOf } from "./standard-of";
 import { standardColumns } from "@/lib/server/ladders/standard-columns";
 import { keyOpen, type KeyPlaceholders } from "@/lib/server/http/idempotency";
@@ -55,8 +55,13 @@ export interface PositionContext {
  */
 export const PAST_TODAY = 2;
 
-/** The dates read for a verdict: every window of the standard, plus the dates past today. */
-export const RECENT_DATES = MAX_LOOKBACK_SESSIONS + PAST_TODAY;
+/**
+ * The dates read for a verdict on a rung: the sessions its standard looks back over (the engine's
+ * lookbackSessions), plus the dates past today.
+ */
+export function recentDatesOf(standard: Standard): number {
+  return lookbackSessions(standard) + PAST_TODAY;
+}
 
 /** The last date whose entries a verdict as of `asOf` may read: the UTC date of the instant plus one. */
 export function horizonOf(asOf: Date): string {
@@ -95,7 +100,20 @@ const prerequisites = sql<PrerequisiteState[]>`(
     order by r.position limit 1))`;
 
 /**
- * The earliest date of the recent entries: the oldest of the last RECENT_DATES dates with entries
+ * recentDatesOf for the row's rung, in SQL: from its standard row (a null step-down rule is
+ * switched off), or its measure's default standard when it has none. Pinned against the engine's
+ * numbers by the context tests (tests/integration/logs-context-after-insert.test.ts).
+ */
+const defaultLookback = sql.join(
+  [sql`case ${rungs.measure}`, ...MEASURES.map((m) => sql.raw(`when '${m}' then ${lookbackSessions(defaultStandard(m))}`)), sql`end`],
+  sql` `,
+);
+const recentDates = sql`(case when ${standards.rungId} is null then ${defaultLookback}
+  else greatest(1, ${standards.sessionsWindow}, coalesce((${standards.stepDown} ->> 'painWindow')::int, 0),
+    coalesce((${standards.stepDown} ->> 'dropSessions')::int, 0)) end + ${sql.raw(String(PAST_TODAY))})`;
+
+/**
+ * The earliest date of the recent entries: the oldest of the last recentDates dates with entries
  * up to `horizon`, or the position's date when there are fewer. An entry is live while its own
  * `deleted_at` is null: deleting a log stamps its entries too (deleteLog), so no join to logs is
  * needed here.
@@ -107,7 +125,7 @@ const recentFrom = sql`greatest(${athletePositions.since}, (
       and e.deleted_at is null and e.performed_on >= ${athletePositions.since}
       and e.performed_on <= ${sql.placeholder("horizon")}::date
     order by e.performed_on desc
-    limit ${RECENT_DATES}) d))`;
+    limit ${recentDates}) d))`;
 
 type History = NonNullable<ContextOptions["history"]>;
 
