@@ -3,7 +3,7 @@ import { randomUUID } from "node:crypto";
 import { sql } from "drizzle-orm";
 import type { Db, Tx } from "@/db/client";
 import { oneTrip } from "@/db/one-trip";
-import { preparedOnce, preparedVariants } from "@/db/prepared";
+import { preparedVariants } from "@/db/prepared";
 import { logEntries, logs } from "@/db/schema";
 import { sessionBest } from "@/lib/engine/session-assessment";
 import type { Actor } from "@/lib/server/actor";
@@ -21,30 +21,32 @@ import { currentPositions, lockPlacedRungs, placedOrThrow, type LogRung } from "
 
 export const CREATE_LOG_SCOPE = "POST /api/v1/logs";
 
-/** The log's created_at is the instant its verdicts are for (see writeLog), so no RETURNING is needed. */
-const insertLog = preparedOnce((database: Db) =>
-  database
-    .insert(logs)
-    .values({
-      id: sql.placeholder("id"),
-      teamId: sql.placeholder("teamId"),
-      athleteId: sql.placeholder("athleteId"),
-      performedOn: sql.placeholder("performedOn"),
-      durationMinutes: sql.placeholder("durationMinutes"),
-      sessionRpe: sql.placeholder("sessionRpe"),
-      enteredById: sql.placeholder("enteredById"),
-      createdAt: sql.placeholder("createdAt"),
-    })
-    .prepare("insert_log"),
-);
-
 /**
- * One statement per number of entries (a log has a few), each prepared once. Each entry gets a
- * microsecond more than the one before, so lists ordered by `created_at` keep the order the
- * entries were posted in.
+ * The log and its entries in one statement, one shape per number of entries (a log has a few),
+ * each prepared once: the log's insert rides in a WITH clause (PostgreSQL checks the entries'
+ * reference to it at the end of the statement, when the log's row is in). The ids and created_at
+ * are made by the app (see logRows), so nothing needs to come back. Each entry gets a microsecond
+ * more than the one before, so lists ordered by `created_at` keep the order the entries were
+ * posted in.
  */
-const insertEntries = preparedVariants((database: Db, count: number) =>
-  database
+const insertLogWithEntries = preparedVariants((database: Db, count: number) => {
+  const log = database.$with("log").as(
+    database
+      .insert(logs)
+      .values({
+        id: sql.placeholder("logId"),
+        teamId: sql.placeholder("teamId"),
+        athleteId: sql.placeholder("athleteId"),
+        performedOn: sql.placeholder("performedOn"),
+        durationMinutes: sql.placeholder("durationMinutes"),
+        sessionRpe: sql.placeholder("sessionRpe"),
+        enteredById: sql.placeholder("enteredById"),
+        createdAt: sql.placeholder("createdAt"),
+      })
+      .returning({ id: logs.id }),
+  );
+  return database
+    .with(log)
     .insert(logEntries)
     .values(
       Array.from({ length: count }, (_, i) => ({
@@ -62,8 +64,8 @@ const insertEntries = preparedVariants((database: Db, count: number) =>
         createdAt: sql<Date>`${sql.placeholder("createdAt")}::timestamptz + make_interval(secs => ${sql.raw(String(i))} / 1000000.0)`,
       })),
     )
-    .prepare(`insert_log_entries_${count}`),
-);
+    .prepare(`insert_log_with_entries_${count}`);
+});
 
 /**
  * POST /api/v1/logs: records one post of training at most once per Idempotency-Key. Entries are
@@ -118,11 +120,11 @@ async function writeLog(
     return evaluateWithoutActing(tx, contextWithEntries(ctx, added, asOf), asOf);
   });
   if (quiet.every((evaluation) => evaluation !== null)) {
-    return { value: { ...dto, verdicts: quiet.map((e) => e.verdict) }, last: () => [...insertRows(tx, actor.teamId, log, entries), ...quiet.flatMap((e) => e.figures())] };
+    return { value: { ...dto, verdicts: quiet.map((e) => e.verdict) }, last: () => [insertRows(tx, actor.teamId, log, entries), ...quiet.flatMap((e) => e.figures())] };
   }
 
   const [, ...contexts] = await oneTrip(tx, () => [
-    Promise.all(insertRows(tx, actor.teamId, log, entries)),
+    insertRows(tx, actor.teamId, log, entries),
     ...positionIds.map((positionId) => loadPositionContext(tx, { positionId, teamId: actor.teamId, asOf })),
   ] as const);
   const { verdicts, figures } = await evaluateLoaded(tx, actor, { contexts, logId: log.id }, asOf);
@@ -160,36 +162,27 @@ function logRows(actor: Actor, input: CreateLog & { athleteId: string }, rungLis
   return { log, entries };
 }
 
-/** Sends the log's and its entries' inserts (submitting synchronously, for a oneTrip). */
-function insertRows(tx: Tx, teamId: string, log: LogRow, entries: readonly EntryRow[]) {
-  return [
-    insertLog(tx).execute({
-      id: log.id,
-      teamId,
-      athleteId: log.athleteId,
-      performedOn: log.performedOn,
-      durationMinutes: log.durationMinutes,
-      sessionRpe: log.sessionRpe,
-      enteredById: log.enteredById,
-      createdAt: log.createdAt,
-    }),
-    insertEntries(tx, entries.length).execute(
-      Object.fromEntries([
-        ["teamId", teamId],
-        ["logId", log.id],
-        ["athleteId", log.athleteId],
-        ["performedOn", log.performedOn],
-        ["createdAt", log.createdAt],
-        ...entries.flatMap((e, i) => [
-          [`id${i}`, e.id],
-          [`ladderId${i}`, e.ladderId],
-          [`rungId${i}`, e.rungId],
-          [`sets${i}`, e.sets],
-          [`bestValue${i}`, e.bestValue],
-          [`pain${i}`, e.pain],
-          [`note${i}`, e.note],
-        ]),
+/** Sends the log's and its entries' insert (submitting synchronously, for a oneTrip). */
+function insertRows(tx: Tx, teamId: string, log: LogRow, entries: readonly EntryRow[]): Promise<unknown> {
+  return insertLogWithEntries(tx, entries.length).execute(
+    Object.fromEntries([
+      ["logId", log.id],
+      ["teamId", teamId],
+      ["athleteId", log.athleteId],
+      ["performedOn", log.performedOn],
+      ["durationMinutes", log.durationMinutes],
+      ["sessionRpe", log.sessionRpe],
+      ["enteredById", log.enteredById],
+      ["createdAt", log.createdAt],
+      ...entries.flatMap((e, i) => [
+        [`id${i}`, e.id],
+        [`ladderId${i}`, e.ladderId],
+        [`rungId${i}`, e.rungId],
+        [`sets${i}`, e.sets],
+        [`bestValue${i}`, e.bestValue],
+        [`pain${i}`, e.pain],
+        [`note${i}`, e.note],
       ]),
-    ),
-  ] as const;
+    ]),
+  );
 }
