@@ -32,6 +32,25 @@ describe("localDateOf", () => {
     );
   });
 
+  it("matches the reference library minute by minute through DST days, where a remembered day must not reach (reference library)", () => {
+    // Transitions from the IANA tz database: Berlin and New York in spring and autumn 2026, Lord
+    // Howe's half-hour change, Chatham's +12:45/+13:45, and Santiago, whose clocks skip midnight.
+    const days = [
+      ["2026-03-28T00:00:00Z", "Europe/Berlin"],
+      ["2026-10-24T00:00:00Z", "Europe/Berlin"],
+      ["2026-03-07T12:00:00Z", "America/New_York"],
+      ["2026-10-31T12:00:00Z", "America/New_York"],
+      ["2026-04-04T00:00:00Z", "Australia/Lord_Howe"],
+      ["2026-09-26T00:00:00Z", "Pacific/Chatham"],
+      ["2026-09-05T12:00:00Z", "America/Santiago"],
+    ] as const;
+    for (const [start, zone] of days) {
+      for (let ms = Date.parse(start); ms < Date.parse(start) + 3 * 86_400_000; ms += 7 * 60_000) {
+        expect(localDateOf(new Date(ms), zone)).toBe(format(new TZDate(ms, zone), "yyyy-MM-dd"));
+      }
+    }
+  });
+
   it("answers repeated calls at one instant from its memo without mixing zones", () => {
     const instant = new Date("2026-05-01T15:30:00Z");
     expect(localDateOf(instant, "Asia/Tokyo")).toBe("2026-05-02");

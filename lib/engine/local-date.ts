@@ -1,7 +1,7 @@
 /**
  * Instants ↔ local calendar dates in an IANA zone, through Intl (the runtime's tz database).
- * Formatters are cached per zone, and the last answer per zone is remembered because a batch of
- * verdicts is usually evaluated at one instant.
+ * Formatters are cached per zone, and per zone the span of the last local day asked for is
+ * remembered, because requests ask for the date of "now" again and again all day.
  */
 import { formatDate } from "./calendar-date";
 
@@ -16,7 +16,8 @@ interface WallClock {
 
 const formatters = new Map<string, Intl.DateTimeFormat>();
 const dateFormatters = new Map<string, Intl.DateTimeFormat>();
-const lastAnswer = new Map<string, { ms: number; date: string }>();
+/** Per zone, the instants [from, to] of one local day known to carry no offset change. */
+const knownDays = new Map<string, { from: number; to: number; date: string }>();
 
 function formatterFor(timeZone: string): Intl.DateTimeFormat {
   let formatter = formatters.get(timeZone);
@@ -71,19 +72,34 @@ const US_DATE = /^(\d{1,2})\/(\d{1,2})\/(\d{4})$/;
 /** The team's local date "YYYY-MM-DD" at an instant. */
 export function localDateOf(instant: Date, timeZone: string): string {
   const ms = instant.getTime();
-  const last = lastAnswer.get(timeZone);
-  if (last && last.ms === ms) return last.date;
+  const known = knownDays.get(timeZone);
+  if (known && ms >= known.from && ms <= known.to) return known.date;
+  const date = formattedDate(ms, timeZone);
+  rememberDay(date, timeZone);
+  return date;
+}
+
+function formattedDate(ms: number, timeZone: string): string {
   // en-US numeric is "M/D/YYYY"; anything else (far years, eras) takes the slower, labelled path.
   const match = US_DATE.exec(dateFormatterFor(timeZone).format(ms));
-  let date: string;
-  if (match) {
-    date = formatDate(Number(match[3]), Number(match[1]), Number(match[2]));
-  } else {
-    const clock = wallClock(ms, timeZone);
-    date = formatDate(clock.year, clock.month, clock.day);
-  }
-  lastAnswer.set(timeZone, { ms, date });
-  return date;
+  if (match) return formatDate(Number(match[3]), Number(match[1]), Number(match[2]));
+  const clock = wallClock(ms, timeZone);
+  return formatDate(clock.year, clock.month, clock.day);
+}
+
+/**
+ * Remembers the span of a local day when the zone has the same offset at its first and last
+ * instant (no DST change that day): local time then runs evenly between them, so every instant
+ * between has its date. Other days (a DST change, a midnight that does not exist, years Date
+ * cannot place) are formatted on every call.
+ */
+function rememberDay(date: string, timeZone: string): void {
+  if (!/^\d{4}-/.test(date)) return;
+  const from = instantOfLocal(date, { hour: 0, minute: 0, second: 0 }, timeZone);
+  const to = endOfLocalDay(date, timeZone);
+  if (zoneOffsetMs(from, timeZone) !== zoneOffsetMs(to, timeZone)) return;
+  if (formattedDate(from.getTime(), timeZone) !== date || formattedDate(to.getTime(), timeZone) !== date) return;
+  knownDays.set(timeZone, { from: from.getTime(), to: to.getTime(), date });
 }
 
 /** Offset of local wall-clock time from UTC at an instant, in milliseconds (east positive). */
