@@ -97,7 +97,8 @@ export async function withIdempotency<R>(request: IdempotentRequest, operation: 
     keyScope: request.scope,
     keyName: request.key,
   };
-  type Outcome = { replay: { status: number; body: unknown } } | { replay: null; value: unknown };
+  // A first answer is serialized once: the same JSON is stored for replays and sent.
+  type Outcome = { replay: { status: number; body: unknown } } | { replay: null; json: string };
   const outcome = await transactionInTrips(async (tx): Promise<TripsResult<Outcome>> => {
     // BEGIN, the actor's confirmation (when it was not read fresh), the claim and the operation's
     // reads go out together; nothing is written before all three are back.
@@ -107,17 +108,18 @@ export async function withIdempotency<R>(request: IdempotentRequest, operation: 
     );
     if (!claimId) return { value: { replay: await storedAnswer(tx, request, hash) } };
     const { value, last } = await operation.write(tx, read);
+    const json = JSON.stringify(value ?? null);
     // The operation's last statements, the stored answer and COMMIT go out together.
     return {
-      value: { replay: null, value },
-      last: () => [...(last?.() ?? []), markDone(tx).execute({ id: claimId, status: request.status, body: value ?? null })],
+      value: { replay: null, json },
+      last: () => [...(last?.() ?? []), markDone(tx).execute({ id: claimId, status: request.status, body: json })],
     };
   });
   if (outcome.replay) {
     const { status, body } = outcome.replay;
     return NextResponse.json(body, { status, headers: { "idempotent-replayed": "true" } });
   }
-  return NextResponse.json(outcome.value, { status: request.status });
+  return new NextResponse(outcome.json, { status: request.status, headers: { "content-type": "application/json" } });
 }
 
 /** Taken while a request holds the key: try-lock, so a second request never waits for the first. */
@@ -152,7 +154,8 @@ const claimKey = preparedSql<{ id: string }>(
 const markDone = preparedOnce((database: Db) =>
   database
     .update(idempotencyKeys)
-    .set({ state: "done", responseStatus: sql<number>`${sql.placeholder("status")}`, responseBody: sql.placeholder("body") })
+    // The answer arrives as JSON text (serialized once, see withIdempotency).
+    .set({ state: "done", responseStatus: sql<number>`${sql.placeholder("status")}`, responseBody: sql`${sql.placeholder("body")}::jsonb` })
     .where(eq(idempotencyKeys.id, sql.placeholder("id")))
     .prepare("idempotency_done"),
 );
