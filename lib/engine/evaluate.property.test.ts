@@ -8,11 +8,10 @@ import { addDays } from "./calendar-date";
 import { DEFAULT_STEP_DOWN } from "./defaults";
 import { evaluate } from "./evaluate";
 import { setValue } from "./set-value";
-import type { EvaluationInput, Measure, Session, SetEntry, Standard } from "./types";
+import { measureArb, sessionsArb } from "./test-arbitraries";
+import type { EvaluationInput, Measure, Session, Standard } from "./types";
 
 const SINCE = "2026-03-01";
-
-const measureArb = fc.constantFrom<Measure>("hold_seconds", "hold_seconds_each_side", "eccentric_seconds", "reps");
 
 const standardArb: fc.Arbitrary<Standard> = fc
   .record({
@@ -33,28 +32,8 @@ const standardArb: fc.Arbitrary<Standard> = fc
     stepDown: stepDownOn ? DEFAULT_STEP_DOWN : null,
   }));
 
-const setArb: fc.Arbitrary<SetEntry> = fc.record({
-  value: fc.integer({ min: 0, max: 40 }),
-  left: fc.integer({ min: 0, max: 40 }),
-  right: fc.integer({ min: 0, max: 40 }),
-  reps: fc.integer({ min: 0, max: 5 }),
-  rpe: fc.option(fc.integer({ min: 5, max: 10 }), { nil: undefined }),
-});
-
 /** Sessions on distinct days 0–20 after SINCE. */
-const sessionsArb: fc.Arbitrary<Session[]> = fc
-  .uniqueArray(fc.integer({ min: 0, max: 20 }), { maxLength: 8 })
-  .chain((days) =>
-    fc.tuple(
-      ...days.map((day) =>
-        fc.record({
-          date: fc.constant(addDays(SINCE, day)),
-          sets: fc.array(setArb, { maxLength: 5 }),
-          pain: fc.boolean(),
-        }),
-      ),
-    ),
-  );
+const sessionsArbitrary = sessionsArb(SINCE, { lastDay: 20, maxLength: 8, maxSets: 5 });
 
 interface Case {
   measure: Measure;
@@ -67,7 +46,7 @@ interface Case {
 const caseArb: fc.Arbitrary<Case> = fc.record({
   measure: measureArb,
   standard: standardArb,
-  sessions: sessionsArb,
+  sessions: sessionsArbitrary,
   asOfDay: fc.integer({ min: 0, max: 25 }),
   reached: fc.array(fc.boolean(), { maxLength: 2 }),
 });

@@ -10,12 +10,11 @@ import { addDays } from "./calendar-date";
 import { defaultStandard, MAX_LOOKBACK_SESSIONS } from "./defaults";
 import { evaluate } from "./evaluate";
 import { lookbackSessions } from "./lookback";
-import type { EvaluationInput, Measure, Session, SetEntry, Standard, StepDownRule } from "./types";
+import { measureArb, sessionsArb } from "./test-arbitraries";
+import type { EvaluationInput, Measure, Session, Standard, StepDownRule } from "./types";
 
 const SINCE = "2026-01-05";
 const DAYS = 60;
-
-const measureArb = fc.constantFrom<Measure>("hold_seconds", "hold_seconds_each_side", "eccentric_seconds", "reps");
 
 const ruleArb: fc.Arbitrary<StepDownRule> = fc
   .record({
@@ -46,20 +45,8 @@ const standardArb: fc.Arbitrary<Standard> = fc
     ...(stepDown === undefined ? {} : { stepDown }),
   }));
 
-const setArb: fc.Arbitrary<SetEntry> = fc.record({
-  value: fc.integer({ min: 0, max: 40 }),
-  left: fc.integer({ min: 0, max: 40 }),
-  right: fc.integer({ min: 0, max: 40 }),
-  reps: fc.integer({ min: 0, max: 5 }),
-  rpe: fc.option(fc.integer({ min: 5, max: 10 }), { nil: undefined }),
-});
-
 /** Up to 40 sessions on distinct days of the 60 after SINCE: often more than any look-back. */
-const sessionsArb: fc.Arbitrary<Session[]> = fc
-  .uniqueArray(fc.integer({ min: 0, max: DAYS }), { maxLength: 40 })
-  .chain((days) =>
-    fc.tuple(...days.map((day) => fc.record({ date: fc.constant(addDays(SINCE, day)), sets: fc.array(setArb, { maxLength: 4 }), pain: fc.boolean() }))),
-  );
+const historyArb = sessionsArb(SINCE, { lastDay: DAYS, maxLength: 40, maxSets: 4 });
 
 function input(measure: Measure, standard: Standard, sessions: Session[], today: string): EvaluationInput {
   return { measure, standard, sessions, since: SINCE, asOf: new Date(`${today}T12:00:00Z`), timeZone: "UTC", prerequisites: [] };
@@ -68,7 +55,7 @@ function input(measure: Measure, standard: Standard, sessions: Session[], today:
 describe("lookbackSessions", () => {
   it("is the most sessions any clause looks at: the verdict on the latest that many equals the whole history's (fast-check)", () => {
     fc.assert(
-      fc.property(measureArb, standardArb, sessionsArb, fc.integer({ min: 0, max: DAYS + 2 }), (measure, standard, sessions, day) => {
+      fc.property(measureArb, standardArb, historyArb, fc.integer({ min: 0, max: DAYS + 2 }), (measure, standard, sessions, day) => {
         const today = addDays(SINCE, day);
         const latest = sessions
           .filter((s) => s.date <= today)
