@@ -1,7 +1,8 @@
 /**
  * Instants ↔ local calendar dates in an IANA zone, through Intl (the runtime's tz database).
- * Formatters are cached per zone, and per zone the span of the last local day asked for is
- * remembered, because requests ask for the date of "now" again and again all day.
+ * Formatters are cached per zone, and per zone the span of a local day asked for twice in a row
+ * is remembered, because requests ask for the date of "now" again and again all day (a replay
+ * that steps through the days asks for each once, and pays nothing for the memo).
  */
 import { formatDate } from "./calendar-date";
 
@@ -16,8 +17,11 @@ interface WallClock {
 
 const formatters = new Map<string, Intl.DateTimeFormat>();
 const dateFormatters = new Map<string, Intl.DateTimeFormat>();
-/** Per zone, the instants [from, to] of one local day known to carry no offset change. */
-const knownDays = new Map<string, { from: number; to: number; date: string }>();
+/**
+ * Per zone, the last local day asked for and its span: undefined until the day is asked for again,
+ * null for a day that is not remembered (see spanOf).
+ */
+const lastDays = new Map<string, { date: string; span: { from: number; to: number } | null | undefined }>();
 
 function formatterFor(timeZone: string): Intl.DateTimeFormat {
   let formatter = formatters.get(timeZone);
@@ -72,10 +76,11 @@ const US_DATE = /^(\d{1,2})\/(\d{1,2})\/(\d{4})$/;
 /** The team's local date "YYYY-MM-DD" at an instant. */
 export function localDateOf(instant: Date, timeZone: string): string {
   const ms = instant.getTime();
-  const known = knownDays.get(timeZone);
-  if (known && ms >= known.from && ms <= known.to) return known.date;
+  const last = lastDays.get(timeZone);
+  if (last?.span && ms >= last.span.from && ms <= last.span.to) return last.date;
   const date = formattedDate(ms, timeZone);
-  rememberDay(date, timeZone);
+  if (last?.date !== date) lastDays.set(timeZone, { date, span: undefined });
+  else if (last.span === undefined) last.span = spanOf(date, timeZone);
   return date;
 }
 
@@ -88,18 +93,18 @@ function formattedDate(ms: number, timeZone: string): string {
 }
 
 /**
- * Remembers the span of a local day when the zone has the same offset at its first and last
- * instant (no DST change that day): local time then runs evenly between them, so every instant
- * between has its date. Other days (a DST change, a midnight that does not exist, years Date
- * cannot place) are formatted on every call.
+ * The first and last instant of a local day when the zone has the same offset at both (no DST
+ * change that day): local time then runs evenly between them, so every instant between has that
+ * date. Null for other days (a DST change, a midnight that does not exist, years Date cannot
+ * place): they are formatted on every call.
  */
-function rememberDay(date: string, timeZone: string): void {
-  if (!/^\d{4}-/.test(date)) return;
+function spanOf(date: string, timeZone: string): { from: number; to: number } | null {
+  if (!/^\d{4}-/.test(date)) return null;
   const from = instantOfLocal(date, { hour: 0, minute: 0, second: 0 }, timeZone);
   const to = endOfLocalDay(date, timeZone);
-  if (zoneOffsetMs(from, timeZone) !== zoneOffsetMs(to, timeZone)) return;
-  if (formattedDate(from.getTime(), timeZone) !== date || formattedDate(to.getTime(), timeZone) !== date) return;
-  knownDays.set(timeZone, { from: from.getTime(), to: to.getTime(), date });
+  if (zoneOffsetMs(from, timeZone) !== zoneOffsetMs(to, timeZone)) return null;
+  if (formattedDate(from.getTime(), timeZone) !== date || formattedDate(to.getTime(), timeZone) !== date) return null;
+  return { from: from.getTime(), to: to.getTime() };
 }
 
 /** Offset of local wall-clock time from UTC at an instant, in milliseconds (east positive). */
