@@ -15,6 +15,7 @@ import { defaultStandard, MAX_LOOKBACK_SESSIONS, type StepDownRule } from "@/lib
 import type { VerdictDto } from "@/lib/validation/verdicts";
 import { getPositionVerdict } from "@/lib/server/promotions/get-position-verdict";
 import { contextWithEntries } from "@/lib/server/promotions/context-with-entries";
+import { standardRow } from "@/lib/server/ladders/rung-rows";
 import { judgePosition } from "@/lib/server/promotions/judge-position";
 import { loadPositionContext, PAST_TODAY } from "@/lib/server/promotions/load-position-context";
 import { bearerFor, createAthleteRecord, createMember, createTeam } from "../support/factories";
@@ -49,19 +50,14 @@ const standardArb = fc.option(fc.record({ sessionsWindow: windowArb, stepDown: s
 async function setStandard(teamId: string, rungId: string, own: { sessionsWindow: number; stepDown: StepDownRule | null } | null) {
   await db.delete(standards).where(eq(standards.rungId, rungId));
   if (!own) return;
-  const base = defaultStandard("hold_seconds");
-  await db.insert(standards).values({
-    ...base,
-    rungId,
-    teamId,
-    minReps: null,
-    maxRpe: base.maxRpe ?? null,
-    minRir: null,
+  const standard = {
+    ...defaultStandard("hold_seconds"),
     sessionsRequired: Math.min(2, own.sessionsWindow),
     sessionsWindow: own.sessionsWindow,
     // fast-check builds records without a prototype; Drizzle wants a plain object.
     stepDown: own.stepDown && { ...own.stepDown },
-  });
+  };
+  await db.insert(standards).values({ rungId, teamId, ...standardRow(standard) });
 }
 
 describe("a context read before a log's inserts, plus its entries", () => {

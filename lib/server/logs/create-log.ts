@@ -26,9 +26,8 @@ export const CREATE_LOG_SCOPE = "POST /api/v1/logs";
  * each prepared once: the log's insert rides in a WITH clause (PostgreSQL checks the entries'
  * reference to it at the end of the statement, when the log's row is in). The ids and created_at
  * are made by the app (see logRows), so nothing needs to come back (the WITH clause's RETURNING is
- * only the selection Drizzle's `$with` asks for). Each entry gets a microsecond
- * more than the one before, so lists ordered by `created_at` keep the order the entries were
- * posted in.
+ * only the selection Drizzle's `$with` asks for). Each entry gets a microsecond more than the one
+ * before, so lists ordered by `created_at` keep the order the entries were posted in.
  */
 const insertLogWithEntries = preparedVariants((database: Db, count: number) => {
   const log = database.$with("log").as(
