@@ -1,5 +1,6 @@
 // How thrown errors become HTTP answers: typed errors keep their status, a value PostgreSQL refused
 // (SQLSTATE class 22, "data exception", PostgreSQL documentation appendix A) is the caller's 422,
+// a foreign key violation (23503, same appendix) from a row deleted under the request is 409,
 // anything else is our 500.
 import { DrizzleQueryError } from "drizzle-orm/errors";
 import { afterEach, describe, expect, it, vi } from "vitest";
@@ -22,6 +23,14 @@ describe("errorResponse", () => {
   it("answers 422 for a data exception thrown by the driver itself (22008: date out of range)", () => {
     vi.spyOn(console, "warn").mockImplementation(() => undefined);
     expect(errorResponse(pgError("22008")).status).toBe(422);
+  });
+
+  it("answers 409 for a foreign key violation (23503): a row the request named was deleted meanwhile", async () => {
+    const warn = vi.spyOn(console, "warn").mockImplementation(() => undefined);
+    const res = errorResponse(new DrizzleQueryError("insert into log_entries ...", [], pgError("23503")));
+    expect(res.status).toBe(409);
+    expect((await res.json()).error.code).toBe("conflict");
+    expect(warn).toHaveBeenCalledOnce();
   });
 
   it("keeps 500 for other database errors (23505: a unique violation is ours to prevent)", () => {

@@ -1,20 +1,20 @@
 import "server-only";
 import { NextResponse } from "next/server";
-import { AppError, TooManyRequests, Unprocessable } from "@/lib/errors";
+import { AppError, Conflict, TooManyRequests, Unprocessable } from "@/lib/errors";
 
 export interface ErrorBody {
   error: { code: string; message: string; issues?: { path: string; message: string }[] };
 }
 
 /**
- * The PostgreSQL error code when the error (or what it wraps: Drizzle wraps the driver's error in
- * `cause`) is a data exception, class 22: a value the database cannot cast or store.
+ * The PostgreSQL error code (SQLSTATE) of the error or of what it wraps (Drizzle wraps the
+ * driver's error in `cause`), when it has one.
  */
-function dataExceptionCode(error: unknown): string | null {
+function sqlState(error: unknown): string | null {
   let current: unknown = error;
   for (let depth = 0; current && typeof current === "object" && depth < 3; depth += 1) {
     const code = (current as { code?: unknown }).code;
-    if (typeof code === "string" && /^22[0-9A-Z]{3}$/.test(code)) return code;
+    if (typeof code === "string" && /^[0-9A-Z]{5}$/.test(code)) return code;
     current = (current as { cause?: unknown }).cause;
   }
   return null;
@@ -22,14 +22,21 @@ function dataExceptionCode(error: unknown): string | null {
 
 /**
  * The one place that turns a thrown error into an HTTP answer. Unknown errors are 500 and logged.
- * A value the database refused (class 22) came from the request, since validation let it through:
- * 422, and a warning so the missing check gets written.
+ * Two database refusals are the request's, not ours, and get a warning so the gap can be closed:
+ * - a data exception (class 22): a value validation let through that the database cannot store,
+ *   422;
+ * - a foreign key violation (23503): a row the request names was deleted by another request
+ *   between this one's check of it and its write, 409, try again.
  */
 export function errorResponse(error: unknown): NextResponse<ErrorBody> {
-  const dataCode = error instanceof AppError ? null : dataExceptionCode(error);
-  if (dataCode) {
-    console.warn(`A request value reached the database and was refused (${dataCode}); validation should catch it`, error);
+  const state = error instanceof AppError ? null : sqlState(error);
+  if (state?.startsWith("22")) {
+    console.warn(`A request value reached the database and was refused (${state}); validation should catch it`, error);
     return errorResponse(new Unprocessable("A value in the request cannot be stored. Check the dates, numbers and text sent."));
+  }
+  if (state === "23503") {
+    console.warn("A row the request refers to was removed while the request was being saved", error);
+    return errorResponse(new Conflict("Something this request refers to was removed while it was being saved. Reload and try again."));
   }
   if (error instanceof AppError) {
     const body: ErrorBody = { error: { code: error.code, message: error.message } };
