@@ -16,7 +16,7 @@ const ERROR_TEXT: Record<number, string> = {
   401: "No identity: sign in or send a Bearer token",
   403: "Your role does not allow this",
   404: "Not found, or not in your team",
-  409: "Conflict with the current state (for a write, also: a row it names was removed by another request meanwhile)",
+  409: "Conflict with the current state (for a write, also: another request removed a row it refers to, or began using one it removes)",
   413: "Body too large",
   415: "Unsupported media type",
   422: "Validation failed; `issues` names each field",
@@ -53,7 +53,7 @@ export function defineOperation(registry: OpenAPIRegistry, op: Operation): void 
     errors.add(422);
   }
   if (op.query) errors.add(422);
-  // A write whose row is removed by another request between its checks and its insert is 409.
+  // A write that another request overtakes (a referenced row removed, a removed row taken into use) is 409.
   if (op.method !== "get") errors.add(409);
   const responses: Record<string, object> = {
     [op.ok.status]: {

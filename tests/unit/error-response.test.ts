@@ -1,6 +1,6 @@
 // How thrown errors become HTTP answers: typed errors keep their status, a value PostgreSQL refused
 // (SQLSTATE class 22, "data exception", PostgreSQL documentation appendix A) is the caller's 422,
-// a foreign key violation (23503, same appendix) from a row deleted under the request is 409,
+// a foreign key violation (23503, same appendix) from rows changed under the request is 409,
 // anything else is our 500.
 import { DrizzleQueryError } from "drizzle-orm/errors";
 import { afterEach, describe, expect, it, vi } from "vitest";
@@ -25,7 +25,7 @@ describe("errorResponse", () => {
     expect(errorResponse(pgError("22008")).status).toBe(422);
   });
 
-  it("answers 409 for a foreign key violation (23503): a row the request named was deleted meanwhile", async () => {
+  it("answers 409 for a foreign key violation (23503): rows changed under the request", async () => {
     const warn = vi.spyOn(console, "warn").mockImplementation(() => undefined);
     const res = errorResponse(new DrizzleQueryError("insert into log_entries ...", [], pgError("23503")));
     expect(res.status).toBe(409);

@@ -25,8 +25,9 @@ function sqlState(error: unknown): string | null {
  * Two database refusals are the request's, not ours, and get a warning so the gap can be closed:
  * - a data exception (class 22): a value validation let through that the database cannot store,
  *   422;
- * - a foreign key violation (23503): a row the request names was deleted by another request
- *   between this one's check of it and its write, 409, try again.
+ * - a foreign key violation (23503): another request changed the rows between this one's checks
+ *   and its write (a row it refers to was deleted, or a row it deletes came into use), 409, try
+ *   again.
  */
 export function errorResponse(error: unknown): NextResponse<ErrorBody> {
   const state = error instanceof AppError ? null : sqlState(error);
@@ -35,8 +36,10 @@ export function errorResponse(error: unknown): NextResponse<ErrorBody> {
     return errorResponse(new Unprocessable("A value in the request cannot be stored. Check the dates, numbers and text sent."));
   }
   if (state === "23503") {
-    console.warn("A row the request refers to was removed while the request was being saved", error);
-    return errorResponse(new Conflict("Something this request refers to was removed while it was being saved. Reload and try again."));
+    console.warn("A reference changed under the request between its checks and its write", error);
+    return errorResponse(
+      new Conflict("Someone changed this at the same moment: something it refers to was removed, or something it removes is now in use. Reload and try again."),
+    );
   }
   if (error instanceof AppError) {
     const body: ErrorBody = { error: { code: error.code, message: error.message } };
