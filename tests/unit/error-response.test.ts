@@ -12,25 +12,20 @@ const pgError = (code: string) => Object.assign(new Error("refused"), { code });
 describe("errorResponse", () => {
   afterEach(() => vi.restoreAllMocks());
 
-  it("answers 422 for a data exception wrapped by Drizzle (22021: a NUL in text)", async () => {
+  it.each([
+    { code: "22021", what: "a data exception (a NUL in text)", status: 422, answer: "validation_failed" },
+    { code: "23503", what: "a foreign key violation (rows changed under the request)", status: 409, answer: "conflict" },
+  ])("answers $status for $what wrapped by Drizzle ($code), with a warning", async ({ code, status, answer }) => {
     const warn = vi.spyOn(console, "warn").mockImplementation(() => undefined);
-    const res = errorResponse(new DrizzleQueryError("insert into athletes ...", [], pgError("22021")));
-    expect(res.status).toBe(422);
-    expect((await res.json()).error.code).toBe("validation_failed");
+    const res = errorResponse(new DrizzleQueryError("insert into log_entries ...", [], pgError(code)));
+    expect(res.status).toBe(status);
+    expect((await res.json()).error.code).toBe(answer);
     expect(warn).toHaveBeenCalledOnce();
   });
 
   it("answers 422 for a data exception thrown by the driver itself (22008: date out of range)", () => {
     vi.spyOn(console, "warn").mockImplementation(() => undefined);
     expect(errorResponse(pgError("22008")).status).toBe(422);
-  });
-
-  it("answers 409 for a foreign key violation (23503): rows changed under the request", async () => {
-    const warn = vi.spyOn(console, "warn").mockImplementation(() => undefined);
-    const res = errorResponse(new DrizzleQueryError("insert into log_entries ...", [], pgError("23503")));
-    expect(res.status).toBe(409);
-    expect((await res.json()).error.code).toBe("conflict");
-    expect(warn).toHaveBeenCalledOnce();
   });
 
   it("keeps 500 for other database errors (23505: a unique violation is ours to prevent)", () => {
