@@ -1,10 +1,10 @@
 /** fast-check generators shared by the engine's property tests. */
 import fc from "fast-check";
 import { addDays } from "./calendar-date";
-import type { Measure, Session, SetEntry } from "./types";
+import { MEASURES, type Measure, type Session, type SetEntry } from "./types";
 
-/** Measures of every kind of set value: one number, both sides, lowerings with reps. */
-export const measureArb = fc.constantFrom<Measure>("hold_seconds", "hold_seconds_each_side", "eccentric_seconds", "reps");
+/** Every measure the engine knows: one number, both sides, lowerings with reps. */
+export const measureArb = fc.constantFrom<Measure>(...MEASURES);
 
 /** A set with every field a measure may read, some with an effort rating. */
 export const setArb: fc.Arbitrary<SetEntry> = fc.record({
